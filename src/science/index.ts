@@ -1,0 +1,2 @@
+// The science core's public face: re-exports grow as modules land.
+export {};
