@@ -1,0 +1,2 @@
+export { ReadingBuffer } from './readingBuffer.ts';
+export { headRateCPerMin } from './headRate.ts';
