@@ -6,7 +6,7 @@ const themeColour = '#0b4f5c';
 
 export default defineConfig({
   oxc: { jsx: { runtime: 'automatic', importSource: 'preact' } },
-  build: { target: 'es2022', sourcemap: false },
+  build: { target: 'es2022', sourcemap: false, manifest: true },
   worker: { format: 'es' },
   plugins: [
     VitePWA({

@@ -65,13 +65,16 @@ check('lint', 'npx', ['eslint', '.']);
 vitestProject('unit');
 
 const built = check('build', 'npx', ['vite', 'build']);
-if (!built) {
-  console.log('\n(browser tests skipped: the build failed)');
-} else if (!ensureChromium()) {
-  failed += 1;
-  failures.push('browser tests: Chromium missing (apt-get install chromium)');
+if (built) {
+  check('first-load JavaScript within budget (bench/bundle-size.mjs)', 'node', ['bench/bundle-size.mjs']);
+  if (ensureChromium()) {
+    vitestProject('browser');
+  } else {
+    failed += 1;
+    failures.push('browser tests: Chromium missing (apt-get install chromium)');
+  }
 } else {
-  vitestProject('browser');
+  console.log('\n(browser tests skipped: the build failed)');
 }
 
 console.log('');

@@ -1,0 +1,28 @@
+import { chromium, devices, type Browser, type BrowserContext } from 'playwright-core';
+
+export const chromiumPath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+
+/**
+ * Debian's Chromium, headless. The background-networking flags matter here: with no internet,
+ * Chromium's own connections otherwise fail many at a time and slow every start.
+ */
+export function launchChromium(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: chromiumPath,
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+/** A phone-sized context (Pixel-class emulation: viewport, touch, user agent). */
+export function phoneContext(browser: Browser): Promise<BrowserContext> {
+  return browser.newContext({ ...devices['Pixel 7'], serviceWorkers: 'allow' });
+}
