@@ -1,2 +1,6 @@
 export { ReadingBuffer } from './readingBuffer.ts';
 export { headRateCPerMin } from './headRate.ts';
+export { createRunHeader, currentReceiver, toRunRecord, runRecordFormat, runRecordVersion } from './runRecord.ts';
+export type {
+  AlertRecord, ChargeComponent, NewRun, ReadingGap, ReceiverChange, RunEventRecord, RunHeader, RunRecord, RunStatus, TimedNote,
+} from './runRecord.ts';
