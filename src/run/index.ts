@@ -4,3 +4,5 @@ export { createRunHeader, currentReceiver, toRunRecord, runRecordFormat, runReco
 export type {
   AlertRecord, ChargeComponent, NewRun, ReadingGap, ReceiverChange, RunEventRecord, RunHeader, RunRecord, RunStatus, TimedNote,
 } from './runRecord.ts';
+export { AlarmBook } from './alarmBook.ts';
+export type { Alarm, AlarmBookOptions, AlarmBookState, AlarmKind } from './alarmBook.ts';

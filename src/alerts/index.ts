@@ -1,0 +1,12 @@
+export { Alerter } from './alerter.ts';
+export type { AlarmAnnouncement, AlertChannels, Delivered } from './alerter.ts';
+export { SpeechAnnouncer, chooseVoice } from './speech.ts';
+export type { SpeechLike } from './speech.ts';
+export { TonePlayer, tonePatterns } from './tone.ts';
+export type { TonePattern } from './tone.ts';
+export { vibrator, alarmVibration, infoVibration } from './vibration.ts';
+export type { Vibrate } from './vibration.ts';
+export { AlarmNotifier, browserNotifierDeps } from './notifications.ts';
+export type { NotifierDeps } from './notifications.ts';
+export { ScreenWakeLock, browserWakeLockDeps } from './wakeLock.ts';
+export type { WakeLockDeps, WakeLockStatus } from './wakeLock.ts';
