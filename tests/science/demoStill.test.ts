@@ -56,3 +56,15 @@ describe('createDemoStill', () => {
     expect(() => createDemoStill().step(-1)).toThrow(RangeError);
   });
 });
+
+describe('createDemoStill(options, snapshot)', () => {
+  it('carries a run on from a saved snapshot exactly as if it had never stopped', () => {
+    const straight = createDemoStill();
+    for (let t = 0; t < 2000; t++) straight.step(1);
+    const saved = JSON.parse(JSON.stringify(straight.snapshot()));
+    const resumed = createDemoStill({}, saved);
+    for (let t = 0; t < 500; t++) {
+      expect(resumed.step(1)).toEqual(straight.step(1));
+    }
+  });
+});

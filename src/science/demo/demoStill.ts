@@ -91,13 +91,20 @@ export const demoMixture = {
   chargeMl: [30, 30],
 };
 
+/** Everything needed to carry a demo run on after the app was closed. */
+export interface DemoStillSnapshot extends DemoStillState {
+  boilingForS: number;
+}
+
 export interface DemoStill {
   readonly state: DemoStillState;
+  /** The full internal state, to save and pass back to createDemoStill. */
+  snapshot(): DemoStillSnapshot;
   /** Advances the model by dtS seconds and returns the new state. */
   step(dtS: number): DemoStillState;
 }
 
-export function createDemoStill(options: DemoStillOptions = {}): DemoStill {
+export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStillSnapshot): DemoStill {
   const roomC = options.roomC ?? 21;
   const pressurePa = options.pressurePa ?? 101_325;
   if (!(pressurePa > 0)) throw new RangeError('pressure must be > 0 Pa');
@@ -118,6 +125,10 @@ export function createDemoStill(options: DemoStillOptions = {}): DemoStill {
   let timeS = 0;
   let boilingForS = 0;
   let phase: DemoPhase = 'heating';
+  if (from) {
+    ({ potMol, potC, headC, distilledMl, timeS, boilingForS, phase } = from);
+    potLight = from.potLightFraction;
+  }
 
   // Pot heating: first-order approach to a mantle well above the bubble point (time constant in s).
   const mantleC = 150;
@@ -184,6 +195,7 @@ export function createDemoStill(options: DemoStillOptions = {}): DemoStill {
     get state() {
       return snapshot();
     },
+    snapshot: () => ({ ...snapshot(), boilingForS }),
     step,
   };
 }

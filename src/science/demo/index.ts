@@ -1,2 +1,2 @@
 export { createDemoStill, demoMixture } from './demoStill.ts';
-export type { DemoStill, DemoStillOptions, DemoStillState, DemoPhase } from './demoStill.ts';
+export type { DemoStill, DemoStillOptions, DemoStillSnapshot, DemoStillState, DemoPhase } from './demoStill.ts';

@@ -1,4 +1,4 @@
-import { createDemoStill, type DemoStill } from '../../science/demo/index.ts';
+import { createDemoStill, type DemoStill, type DemoStillSnapshot } from '../../science/demo/index.ts';
 import { browserClock, type Clock } from '../clock.ts';
 
 export interface SimulatedReading {
@@ -51,6 +51,11 @@ export class SimulatedSource {
   set speed(value: number) {
     if (!(value > 0)) throw new RangeError('speed must be > 0');
     this.#speed = value;
+  }
+
+  /** The demo still's state, saved with the run so a reopened app carries on from it. */
+  snapshot(): DemoStillSnapshot {
+    return this.#still.snapshot();
   }
 
   get isRunning(): boolean {
