@@ -6,3 +6,4 @@ export type {
 } from './runRecord.ts';
 export { AlarmBook } from './alarmBook.ts';
 export type { Alarm, AlarmBookOptions, AlarmBookState, AlarmKind } from './alarmBook.ts';
+export { downsampleMinMax } from './downsample.ts';

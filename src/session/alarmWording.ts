@@ -19,12 +19,20 @@ export function wordEvent(event: WatcherEvent, nextReceiver: number): { alarm: A
       return { info: 'Vapour has reached the thermometer' };
     case 'plateau':
       return { info: `Steady${degrees(event.head_c)}` };
+    case 'cut':
+      return {
+        alarm: {
+          kind: 'change-receiver',
+          message: `Planned cut reached${degrees(event.head_c)}`,
+          action: `Change to receiver ${typeof event.receiver === 'number' ? event.receiver : nextReceiver}`,
+        },
+      };
     case 'breakthrough':
       return {
         alarm: {
           kind: 'change-receiver',
           message: `Temperature rising off the plateau${degrees(event.head_c)}`,
-          action: `Change to receiver ${nextReceiver}`,
+          action: `Change to receiver ${typeof event.receiver === 'number' ? event.receiver : nextReceiver}`,
         },
       };
     case 'stall': {
@@ -50,7 +58,7 @@ export function wordEvent(event: WatcherEvent, nextReceiver: number): { alarm: A
       return {
         alarm: {
           kind: 'sensor-lost',
-          message: `Sensor problem${event.reason ? `: ${String(event.reason)}` : ''}`,
+          message: `Sensor problem${event.reason ? `: ${String(event.reason).replace(/-/g, ' ')}` : ''}`,
           action: 'Check the thermocouple and its cable; read the thermometer by eye meanwhile',
         },
       };
