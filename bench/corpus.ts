@@ -84,7 +84,8 @@ export const syntheticTruthSource: TruthSource = (spec) => {
   const slow = spec.scenario === 'slow-start';
   const profile: SyntheticProfile = {
     roomC, preWarmC: between(r, 0, 1.5),
-    vapourArrivalS: slow ? between(r, 1900, 3600) : between(r, 180, 1080) / spec.heat,
+    // Heat-up and climbing the column take minutes to over twenty; an hour is a slow start.
+    vapourArrivalS: slow ? between(r, 2400, 3600) : Math.min(1500, between(r, 180, 1080) / Math.sqrt(spec.heat)),
     arrivalTauS: between(r, 4, 30), plateaus, isSlowStart: slow,
     components: spec.components.map((c) => c.name),
   };
@@ -134,21 +135,18 @@ function observe(id: string, spec: CorpusRunSpec, truth: RunTruth, boilingPoints
   if (r.uniform() < 0.5) options.spikesPerHour = between(r, 2, 12);
   if (r.uniform() < 0.4) options.dropoutsPerHour = between(r, 4, 20);
   let scored = truth;
-  const vapour = truth.events.find((e) => e.kind === 'vapour')!.timeS;
-  const endS = truth.timeS[truth.timeS.length - 1]!;
+  // Faults start in a quiet stretch of a plateau: truth after a fault cannot be seen.
+  const quiet = truth.purityIntervals.find((p) => p.endS - p.startS > 800);
   const fault = r.uniform();
-  if (fault < 0.08) {
-    options.openFromS = between(r, vapour + 120, endS - 200);
+  if (quiet && fault < 0.08) {
+    options.openFromS = between(r, quiet.startS + 200, quiet.endS - 500);
     options.openReads = r.uniform() < 0.5 ? 'nan' : 'full-scale';
     scored = truncateTruth(truth, options.openFromS);
     scored.events.push({ kind: 'sensor-fault', timeS: options.openFromS, cause: 'open-thermocouple' });
-  } else if (fault < 0.14) {
-    const plateau = truth.purityIntervals.find((p) => p.endS - p.startS > 700);
-    if (plateau) {
-      options.lostFromS = between(r, plateau.startS + 200, plateau.endS - 500);
-      options.lostToS = options.lostFromS + between(r, 90, 240);
-      scored = { ...truth, events: [...truth.events, { kind: 'sensor-fault', timeS: options.lostFromS, cause: 'sensor-lost' }] };
-    }
+  } else if (quiet && fault < 0.14) {
+    options.lostFromS = between(r, quiet.startS + 200, quiet.endS - 500);
+    options.lostToS = options.lostFromS + between(r, 90, 240);
+    scored = { ...truth, events: [...truth.events, { kind: 'sensor-fault', timeS: options.lostFromS, cause: 'sensor-lost' }] };
   }
   const trace = sensorReadings(truth.timeS, truth.headC, options);
   const label = `${intervalS} s, noise ${options.noiseSdC!.toFixed(2)}${quantumC ? ', 0.25 steps' : ''}`;

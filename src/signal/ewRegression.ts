@@ -54,3 +54,13 @@ export function ewRegressionLevel(r: EwRegression): number {
 export function ewRegressionMean(r: EwRegression): number {
   return r.w > 0 ? r.y / r.w : NaN;
 }
+
+/** Forgets all readings but (`timeS`, `valueC`). */
+export function restartEwRegression(r: EwRegression, timeS: number, valueC: number): void {
+  r.originS = timeS;
+  r.w = 1;
+  r.t = 0;
+  r.tt = 0;
+  r.y = valueC;
+  r.ty = 0;
+}

@@ -12,6 +12,8 @@ import { createWatcherState, type WatcherState } from './watcherState.ts';
 const RECOVER_READINGS = 3;
 /** Quiet time after the last spike before an erratic sensor is trusted again. Units: s. */
 const ERRATIC_CLEAR_S = 60;
+/** Prediction errors beyond this are changes, not noise. Units: degC. */
+const INNOVATION_CLIP_C = 2;
 
 /**
  * The run watcher: fed one reading at a time, it follows the head temperature through the
@@ -82,7 +84,8 @@ export class RunWatcher {
     } else {
       const windowS = Math.max(10, 10 * s.intervalS);
       if (gapS > windowS) spikeFilterReset(s.spikes);
-      spikeFilterPush(s.spikes, timeS, headC, windowS, s.options.erraticSpikesPerMinute, this.onRelease);
+      const forecastC = s.fast.w > 0 ? ewRegressionLevel(s.fast) + ewRegressionSlope(s.fast) * (timeS - s.fast.originS) : headC;
+      spikeFilterPush(s.spikes, timeS, headC, headC - forecastC, windowS, s.options.erraticSpikesPerMinute, this.onRelease);
       const spikeTimes = s.spikes.spikeTimesS;
       if (s.state !== 'fault' && spikeTimes.length >= s.options.erraticSpikesPerMinute && timeS - spikeTimes[0]! <= 60) {
         this.enterFault(timeS, 'erratic');
@@ -101,7 +104,7 @@ export class RunWatcher {
 
   private faultAfterS(): number {
     const interval = Number.isNaN(this.s.intervalS) ? 1 : this.s.intervalS;
-    return Math.max(this.s.options.faultAfterMinS, 5 * interval);
+    return Math.max(this.s.options.faultAfterMinS, 6 * interval);
   }
 
   private checkTime(nowS: number): void {
@@ -157,7 +160,10 @@ export class RunWatcher {
     if (s.fast.w > 0) {
       const predicted = ewRegressionLevel(s.fast) + ewRegressionSlope(s.fast) * dtS;
       const e2 = (valueC - predicted) ** 2;
-      s.innovationVarC2 = Number.isNaN(s.innovationVarC2) ? e2 : s.innovationVarC2 + 0.01 * (e2 - s.innovationVarC2);
+      // Only the reading noise: jumps (vapour, breakthroughs) would swamp it for hours.
+      if (e2 < INNOVATION_CLIP_C * INNOVATION_CLIP_C) {
+        s.innovationVarC2 = Number.isNaN(s.innovationVarC2) ? e2 : s.innovationVarC2 + 0.02 * (e2 - s.innovationVarC2);
+      }
     }
     ewRegressionAdd(s.fast, timeS, valueC);
     ewRegressionAdd(s.slow, timeS, valueC);

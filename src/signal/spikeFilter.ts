@@ -1,11 +1,15 @@
 /**
- * A causal Hampel-type spike filter on a window in seconds. A reading further from the window
- * median than max(4 robust sd, floor) is held as a suspect; a run of suspects on the same side
- * that lasts `confirmS` and two readings is a real change and is released, a suspect followed
- * by an ordinary reading was a spike and is dropped. The window stores at most CAPACITY
+ * A causal Hampel-type spike filter on a window in seconds. The window holds recent prediction
+ * errors (reading minus the smoother's forecast), so a ramp or a cooling curve does not widen
+ * it. A reading whose error lies further from the window median than max(4 robust sd, floor)
+ * is held as a suspect. A run of suspects on the same side that lasts CONFIRM_S and ends in two
+ * readings that agree (within the threshold) is a real change and is released; a front may
+ * keep moving away meanwhile. Suspects followed by an ordinary reading, or by one that falls
+ * back without agreeing, were spikes and are dropped. The window stores at most CAPACITY
  * readings spread over its span, so the work per reading stays constant at 10 Hz.
  */
 export interface SpikeFilter {
+  /** Prediction errors in the window (ring buffer). Units: degC. */
   values: number[];
   times: number[];
   head: number;
@@ -17,7 +21,8 @@ export interface SpikeFilter {
   pendingTimes: number[];
   pendingValues: number[];
   pendingSide: number;
-  /** Times of the latest dropped spikes, oldest first. Units: s. */
+  pendingMaxErrorC: number;
+  /** Times of the latest large spikes that came back, oldest first. Units: s. */
   spikeTimesS: number[];
 }
 
@@ -29,12 +34,14 @@ const SUSPECT_SDS = 4;
 /** A spike smaller than this cannot be told from a real step at the head. Units: degC. */
 export const SPIKE_FLOOR_C = 2;
 const CONFIRM_S = 1;
+/** A spike this large (prediction error) is the sensor's doing. Units: degC. */
+const ERRATIC_SPIKE_C = 8;
 
 export function createSpikeFilter(): SpikeFilter {
   return {
     values: new Array<number>(CAPACITY).fill(0), times: new Array<number>(CAPACITY).fill(0),
     head: 0, count: 0, lastEntryS: -Infinity, medianC: NaN, scaleC: 0, isDirty: false,
-    pendingTimes: [], pendingValues: [], pendingSide: 0, spikeTimesS: [],
+    pendingTimes: [], pendingValues: [], pendingSide: 0, pendingMaxErrorC: 0, spikeTimesS: [],
   };
 }
 
@@ -43,40 +50,44 @@ export function createSpikeFilter(): SpikeFilter {
  * number of spikes dropped by this call. `windowS` is the window span, `keepSpikes` how
  * many spike times to remember (for the erratic-sensor check).
  */
-export function spikeFilterPush(f: SpikeFilter, timeS: number, valueC: number, windowS: number, keepSpikes: number,
+export function spikeFilterPush(f: SpikeFilter, timeS: number, valueC: number, errorC: number, windowS: number, keepSpikes: number,
   release: (timeS: number, valueC: number) => void): number {
   expire(f, timeS, windowS);
   if (f.count === 0) {
-    admit(f, timeS, valueC, windowS, true);
+    admit(f, timeS, errorC, windowS, true);
     release(timeS, valueC);
     return 0;
   }
   if (f.isDirty) summarise(f);
-  const deviation = valueC - f.medianC;
-  const isSuspect = Math.abs(deviation) > Math.max(SUSPECT_SDS * f.scaleC, SPIKE_FLOOR_C);
+  const deviation = errorC - f.medianC;
+  const thresholdC = Math.max(SUSPECT_SDS * f.scaleC, SPIKE_FLOOR_C);
+  const isSuspect = Math.abs(deviation) > thresholdC;
   let dropped = 0;
   if (!isSuspect) {
-    dropped = dropPending(f, keepSpikes);
-    admit(f, timeS, valueC, windowS, false);
+    dropped = dropPending(f, keepSpikes, true);
+    admit(f, timeS, errorC, windowS, false);
     release(timeS, valueC);
     return dropped;
   }
   const side = deviation > 0 ? 1 : -1;
-  if (f.pendingSide !== side) dropped = dropPending(f, keepSpikes);
+  const lastC = f.pendingValues[f.pendingValues.length - 1];
+  // A front (vapour arriving) keeps moving away; a burst of spikes falls back or scatters.
+  const isFront = lastC !== undefined && (valueC - lastC) * side > 0;
+  const isAgreeing = lastC !== undefined && Math.abs(valueC - lastC) <= thresholdC;
+  if (f.pendingSide !== side || (lastC !== undefined && !isFront && !isAgreeing)) dropped = dropPending(f, keepSpikes, false);
   f.pendingSide = side;
+  f.pendingMaxErrorC = Math.max(f.pendingMaxErrorC, Math.abs(deviation));
   f.pendingTimes.push(timeS);
   f.pendingValues.push(valueC);
   const n = f.pendingTimes.length;
-  if ((n >= 2 && timeS - f.pendingTimes[0]! >= CONFIRM_S) || n >= MAX_PENDING) {
-    // A sustained shift: the head really moved. Restart the window at the new level.
+  if ((n >= 2 && isAgreeing && timeS - f.pendingTimes[0]! >= CONFIRM_S) || n >= MAX_PENDING) {
+    // A sustained shift: the head really moved. The old errors describe the old course.
     f.count = 0;
-    for (let i = 0; i < n; i++) {
-      admit(f, f.pendingTimes[i]!, f.pendingValues[i]!, windowS, false);
-      release(f.pendingTimes[i]!, f.pendingValues[i]!);
-    }
+    for (let i = 0; i < n; i++) release(f.pendingTimes[i]!, f.pendingValues[i]!);
     f.pendingTimes.length = 0;
     f.pendingValues.length = 0;
     f.pendingSide = 0;
+    f.pendingMaxErrorC = 0;
   }
   return dropped;
 }
@@ -88,17 +99,21 @@ export function spikeFilterReset(f: SpikeFilter): void {
   f.pendingTimes.length = 0;
   f.pendingValues.length = 0;
   f.pendingSide = 0;
+  f.pendingMaxErrorC = 0;
 }
 
-function dropPending(f: SpikeFilter, keepSpikes: number): number {
+// Only a short, large excursion that came back counts toward an erratic sensor: the knee of a
+// fast rise also leaves a few dropped suspects, small ones, and they say nothing of the sensor.
+function dropPending(f: SpikeFilter, keepSpikes: number, hasReturned: boolean): number {
   const n = f.pendingTimes.length;
-  for (let i = 0; i < n; i++) {
-    f.spikeTimesS.push(f.pendingTimes[i]!);
+  if (n > 0 && hasReturned && n <= 2 && f.pendingMaxErrorC >= ERRATIC_SPIKE_C) {
+    f.spikeTimesS.push(f.pendingTimes[0]!);
     if (f.spikeTimesS.length > keepSpikes) f.spikeTimesS.shift();
   }
   f.pendingTimes.length = 0;
   f.pendingValues.length = 0;
   f.pendingSide = 0;
+  f.pendingMaxErrorC = 0;
   return n;
 }
 

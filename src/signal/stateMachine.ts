@@ -1,6 +1,6 @@
 import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
 import { windowIndexAt } from './cutPlan.ts';
-import { ewRegressionLevel, ewRegressionSlope } from './ewRegression.ts';
+import { ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
 import type { EventKind, FaultReason, StallReason, WatchState } from './types.ts';
 import type { WatcherState } from './watcherState.ts';
 
@@ -28,6 +28,9 @@ const LONG_SAG_C = 1.5;
 const LONG_SAG_S = 480;
 /** A stall is left when the head climbs this far above its lowest reading. Units: degC. */
 const RECOVERY_RISE_C = 3;
+const RECOVERY_HOLD_S = 30;
+/** Climbing faster than this is not creeping (3.6 degC/min). Units: degC/s. */
+const CREEP_MAX_C_PER_S = 0.06;
 /** Crossing a planned cut needs this margin above the window's top, held this long. */
 const CUT_MARGIN_C = 0.3;
 const CUT_HOLD_S = 5;
@@ -68,6 +71,8 @@ function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: num
     s.plateauCandidateS = NaN;
     s.fallSinceS = NaN;
     sink.setState('rising', timeS);
+    // Room-temperature readings would hold the slope up long after the head has settled.
+    restartEwRegression(s.slow, timeS, valueC);
     if (s.plan.length > 0) s.receiverIndex = 0;
     sink.emit(timeS, 'vapour', valueC, undefined, s.plan[0]?.receiver);
     return;
@@ -90,7 +95,9 @@ function watchRising(s: WatcherState, timeS: number, fastC: number, sink: EventS
     fallAway(s, timeS, fastC, sink);
     return;
   }
-  if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.stateSinceS >= o.creepStallS) {
+  // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts.
+  if (Number.isNaN(s.creepSinceS) || ewRegressionSlope(s.slow) > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
+  if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS) {
     s.hasRaisedCreep = true;
     sink.setState('stalled', timeS);
     s.stallReason = 'creeping';
@@ -107,6 +114,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.fallSinceS = NaN;
   s.plateauCandidateS = NaN;
   s.hasRaisedCreep = false;
+  s.creepSinceS = NaN;
   s.stallReason = null;
   sink.setState('plateau', timeS);
   let receiver: number | undefined;
@@ -168,7 +176,8 @@ function fallAway(s: WatcherState, timeS: number, fastC: number, sink: EventSink
 
 function watchRecovery(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
   s.troughC = Math.min(s.troughC, fastC);
-  if (fastC >= s.troughC + RECOVERY_RISE_C) {
+  if (holdsFor(s, timeS, fastC >= s.troughC + RECOVERY_RISE_C, Math.max(RECOVERY_HOLD_S, 1.5 * s.intervalS))) {
+    s.fallSinceS = NaN;
     s.stallReason = null;
     s.peakC = fastC;
     s.plateauCandidateS = NaN;
@@ -190,7 +199,8 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
   sink.emit(timeS, 'cut', fastC, undefined, s.plan[s.receiverIndex]!.receiver);
 }
 
-// An on-delay: `condition` must hold from `fallSinceS` for `holdS`.
+// An on-delay: `condition` must hold from `fallSinceS` for `holdS` (one timer: the states
+// that use it never need two at once).
 function holdsFor(s: WatcherState, timeS: number, condition: boolean, holdS: number): boolean {
   if (!condition) {
     s.fallSinceS = NaN;

@@ -39,6 +39,8 @@ export interface WatcherState {
   residualPowerC2: number;
   hasRaisedNoVapour: boolean;
   hasRaisedCreep: boolean;
+  /** Since when the head has climbed slowly without settling. Units: s. */
+  creepSinceS: number;
   receiverIndex: number;
   cutSinceS: number;
   lastAlarmS: Partial<Record<EventKind, number>>;
@@ -54,6 +56,6 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): 
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualMeanC: 0, residualPowerC2: NaN,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
   };
 }
