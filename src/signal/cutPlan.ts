@@ -1,0 +1,27 @@
+import type { CutWindow } from './types.ts';
+
+/**
+ * A cut plan checked and sorted by temperature. Windows must be finite, fromC < toC, with
+ * distinct receivers, and must not overlap (a temperature belongs to one receiver).
+ */
+export function normaliseCutPlan(windows: readonly CutWindow[]): CutWindow[] {
+  const plan = windows.map((w, i) => {
+    if (!Number.isInteger(w.receiver) || !(w.receiver >= 0)) throw new RangeError(`cut window ${i + 1}: receiver must be a whole number >= 0`);
+    if (!Number.isFinite(w.fromC) || !Number.isFinite(w.toC)) throw new RangeError(`cut window ${i + 1}: from and to must be finite degC`);
+    if (!(w.toC > w.fromC)) throw new RangeError(`cut window ${i + 1}: to (${w.toC} degC) must exceed from (${w.fromC} degC)`);
+    return { receiver: w.receiver, fromC: w.fromC, toC: w.toC };
+  });
+  plan.sort((a, b) => a.fromC - b.fromC);
+  for (let i = 1; i < plan.length; i++) {
+    if (plan[i]!.fromC < plan[i - 1]!.toC) throw new RangeError(`cut windows of receivers ${plan[i - 1]!.receiver} and ${plan[i]!.receiver} overlap`);
+  }
+  if (new Set(plan.map((w) => w.receiver)).size !== plan.length) throw new RangeError('each receiver may have only one cut window');
+  return plan;
+}
+
+/** Index of the window holding `headC`, else of the nearest window below it, else 0. */
+export function windowIndexAt(plan: readonly CutWindow[], headC: number): number {
+  let index = 0;
+  for (let i = 0; i < plan.length; i++) if (headC >= plan[i]!.fromC) index = i;
+  return index;
+}

@@ -1,0 +1,66 @@
+/**
+ * Exponentially weighted local linear regression on real timestamps: sums of weights, t, t^2,
+ * y and t*y, with t measured from the latest reading so the sums never grow large (shifting the
+ * origin instead of accumulating absolute times avoids cancellation after hours of readings).
+ */
+export interface EwRegression {
+  tauS: number;
+  originS: number;
+  w: number;
+  t: number;
+  tt: number;
+  y: number;
+  ty: number;
+}
+
+export function createEwRegression(tauS: number): EwRegression {
+  return { tauS, originS: NaN, w: 0, t: 0, tt: 0, y: 0, ty: 0 };
+}
+
+/** Adds reading (`timeS`, `valueC`); a reading is weighted exp(-age / tau). */
+export function ewRegressionAdd(r: EwRegression, timeS: number, valueC: number): void {
+  if (Number.isNaN(r.originS)) r.originS = timeS;
+  const shiftS = timeS - r.originS;
+  if (shiftS > 0) {
+    const decay = Math.exp(-shiftS / r.tauS);
+    r.tt = (r.tt - 2 * shiftS * r.t + shiftS * shiftS * r.w) * decay;
+    r.t = (r.t - shiftS * r.w) * decay;
+    r.ty = (r.ty - shiftS * r.y) * decay;
+    r.y *= decay;
+    r.w *= decay;
+    r.originS = timeS;
+  }
+  r.w += 1;
+  r.y += valueC;
+}
+
+/** Slope at the latest reading, or 0 with too little spread in time. Units: degC/s. */
+export function ewRegressionSlope(r: EwRegression): number {
+  const det = r.w * r.tt - r.t * r.t;
+  // A few points packed within a fraction of a second give no slope worth trusting.
+  if (!(det > 1e-9 * r.w * r.w) || r.w < 2) return 0;
+  return (r.w * r.ty - r.t * r.y) / det;
+}
+
+/** Fitted value at the latest reading (the intercept of the local line). Units: degC. */
+export function ewRegressionLevel(r: EwRegression): number {
+  if (!(r.w > 0)) return NaN;
+  const det = r.w * r.tt - r.t * r.t;
+  if (!(det > 1e-9 * r.w * r.w) || r.w < 2) return r.y / r.w;
+  return (r.tt * r.y - r.t * r.ty) / det;
+}
+
+/** Weighted mean, with no trend correction (lags a ramp, ignores nothing). Units: degC. */
+export function ewRegressionMean(r: EwRegression): number {
+  return r.w > 0 ? r.y / r.w : NaN;
+}
+
+/** Forgets all readings but (`timeS`, `valueC`). */
+export function restartEwRegression(r: EwRegression, timeS: number, valueC: number): void {
+  r.originS = timeS;
+  r.w = 1;
+  r.t = 0;
+  r.tt = 0;
+  r.y = valueC;
+  r.ty = 0;
+}

@@ -1,0 +1,68 @@
+import type { AlarmWindow, PlateauTruth, ScoredAlarmKind } from './truthWindows.ts';
+
+/** What any detector reports, for scoring (the watcher's events, or a peer's). */
+export interface ScoredEvent {
+  timeS: number;
+  kind: string;
+  headC: number;
+}
+
+export const SCORED_ALARM_KINDS: readonly ScoredAlarmKind[] = ['vapour', 'breakthrough', 'stall', 'sensor-fault'];
+const ALARM_KINDS: ReadonlySet<string> = new Set(['vapour', 'breakthrough', 'stall', 'sensor-fault', 'cut']);
+
+export interface RunScore {
+  truthCount: Record<ScoredAlarmKind, number>;
+  hitCount: Record<ScoredAlarmKind, number>;
+  plateauTruthCount: number;
+  plateauHitCount: number;
+  /** Alarms matching no truth, and second alarms inside a window already hit. */
+  falseAlarmCount: number;
+  nuisanceAlarmCount: number;
+  /** Detection delay of each breakthrough hit. Units: s. */
+  breakthroughLatencyS: number[];
+}
+
+/**
+ * Scores one run: each alarm in time order hits the earliest unmatched truth window of its
+ * kind that holds it; an alarm inside only windows already hit is a nuisance alarm (counted
+ * false too); an alarm in no window is false. A plateau truth is hit by any plateau event
+ * inside its interval with the level within 1.5 degC.
+ */
+export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly PlateauTruth[], events: readonly ScoredEvent[]): RunScore {
+  const zero = (): Record<ScoredAlarmKind, number> => ({ vapour: 0, breakthrough: 0, stall: 0, 'sensor-fault': 0 });
+  const score: RunScore = {
+    truthCount: zero(), hitCount: zero(), plateauTruthCount: plateaus.length, plateauHitCount: 0,
+    falseAlarmCount: 0, nuisanceAlarmCount: 0, breakthroughLatencyS: [],
+  };
+  for (const w of windows) score.truthCount[w.kind]++;
+  const isHit = windows.map(() => false);
+  const alarms = events.filter((e) => ALARM_KINDS.has(e.kind)).sort((a, b) => a.timeS - b.timeS);
+  for (const alarm of alarms) {
+    let open = -1;
+    let isInsideHit = false;
+    for (let i = 0; i < windows.length; i++) {
+      const w = windows[i]!;
+      if (w.kind !== alarm.kind || alarm.timeS < w.fromS || alarm.timeS > w.toS) continue;
+      if (!isHit[i]) {
+        open = i;
+        break;
+      }
+      isInsideHit = true;
+    }
+    if (open >= 0) {
+      const w = windows[open]!;
+      isHit[open] = true;
+      score.hitCount[w.kind]++;
+      if (w.kind === 'breakthrough') score.breakthroughLatencyS.push(alarm.timeS - w.timeS);
+    } else {
+      score.falseAlarmCount++;
+      if (isInsideHit) score.nuisanceAlarmCount++;
+    }
+  }
+  for (const p of plateaus) {
+    if (events.some((e) => e.kind === 'plateau' && e.timeS >= p.startS && e.timeS <= p.endS && Math.abs(e.headC - p.levelC) <= 1.5)) {
+      score.plateauHitCount++;
+    }
+  }
+  return score;
+}

@@ -1,0 +1,211 @@
+import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
+import { windowIndexAt } from './cutPlan.ts';
+import { ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
+import type { EventKind, FaultReason, StallReason, WatchState } from './types.ts';
+import type { WatcherState } from './watcherState.ts';
+
+/** Where the state machine raises events and changes state (the watcher). */
+export interface EventSink {
+  emit(timeS: number, kind: EventKind, headC: number, reason?: StallReason | FaultReason, receiver?: number): boolean;
+  setState(state: WatchState, timeS: number): void;
+}
+
+/** Room baseline follows slow warming of the head with this time constant. Units: s. */
+const BASELINE_TAU_S = 300;
+/** A plateau level follows a slow creep inside +-0.5 degC with this time constant. Units: s. */
+const LEVEL_TAU_S = 600;
+const LEVEL_TRACK_C = 0.5;
+/** Low-pass of the plateau residual whose power estimates the noise's long-run variance. */
+const RESIDUAL_TAU_S = 60;
+const RESIDUAL_POWER_TAU_S = 900;
+/** Safety factor on the estimated long-run variance (the estimate is short and biased low
+ * for wander slower than RESIDUAL_TAU_S). */
+const DIFFUSION_SAFETY = 2;
+/** Least long-run variance assumed: a hood draught of 0.1 degC sd over 30 s. Units: degC^2 s. */
+const DIFFUSION_FLOOR_C2S = 2 * 0.1 * 0.1 * 30;
+/** A sag 1.5 degC below the level that lasts this long is heat too low, not a pre-cut sag. */
+const LONG_SAG_C = 1.5;
+const LONG_SAG_S = 480;
+/** A stall is left when the head climbs this far above its lowest reading. Units: degC. */
+const RECOVERY_RISE_C = 3;
+const RECOVERY_HOLD_S = 30;
+/** Climbing faster than this is not creeping (3.6 degC/min). Units: degC/s. */
+const CREEP_MAX_C_PER_S = 0.06;
+/** Crossing a planned cut needs this margin above the window's top, held this long. */
+const CUT_MARGIN_C = 0.3;
+const CUT_HOLD_S = 5;
+
+/** One reading that passed the spike filter; the filters have already taken it. */
+export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
+  const fastC = ewRegressionLevel(s.fast);
+  switch (s.state) {
+    case 'cold':
+      watchForVapour(s, timeS, valueC, dtS, sink);
+      break;
+    case 'stalled':
+      if (s.stallReason === 'no-vapour') watchForVapour(s, timeS, valueC, dtS, sink);
+      else if (s.stallReason === 'creeping') watchRising(s, timeS, fastC, sink);
+      else watchRecovery(s, timeS, fastC, sink);
+      break;
+    case 'rising':
+    case 'leaving':
+      watchRising(s, timeS, fastC, sink);
+      break;
+    case 'plateau':
+      watchPlateau(s, timeS, valueC, dtS, fastC, sink);
+      break;
+    case 'fault':
+      break;
+  }
+  if (s.plan.length > 0 && s.receiverIndex >= 0 && (s.state === 'rising' || s.state === 'leaving' || s.state === 'plateau')) {
+    watchPlannedCut(s, timeS, fastC, sink);
+  }
+}
+
+function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
+  if (Number.isNaN(s.baselineC)) s.baselineC = valueC;
+  if (valueC - s.baselineC >= s.options.vapourRiseC) {
+    s.vapourTimeS = timeS;
+    s.stallReason = null;
+    s.peakC = valueC;
+    s.plateauCandidateS = NaN;
+    s.fallSinceS = NaN;
+    sink.setState('rising', timeS);
+    // Room-temperature readings would hold the slope up long after the head has settled.
+    restartEwRegression(s.slow, timeS, valueC);
+    if (s.plan.length > 0) s.receiverIndex = 0;
+    sink.emit(timeS, 'vapour', valueC, undefined, s.plan[0]?.receiver);
+    return;
+  }
+  if (valueC - s.baselineC < s.options.vapourRiseC / 2) s.baselineC += -Math.expm1(-dtS / BASELINE_TAU_S) * (valueC - s.baselineC);
+}
+
+function watchRising(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
+  const o = s.options;
+  s.peakC = Math.max(s.peakC, fastC);
+  const interval = s.intervalS;
+  const isSteady = Math.abs(ewRegressionSlope(s.slow)) <= o.flatSlopeCPerS;
+  if (!isSteady) s.plateauCandidateS = NaN;
+  else if (Number.isNaN(s.plateauCandidateS)) s.plateauCandidateS = timeS;
+  else if (timeS - s.plateauCandidateS >= Math.max(o.plateauHoldS, 3 * interval)) {
+    enterPlateau(s, timeS, ewRegressionLevel(s.slow), sink);
+    return;
+  }
+  if (holdsFor(s, timeS, fastC < s.peakC - o.fallAwayC, Math.max(o.fallAwayHoldS, 1.5 * interval))) {
+    fallAway(s, timeS, fastC, sink);
+    return;
+  }
+  // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts.
+  if (Number.isNaN(s.creepSinceS) || ewRegressionSlope(s.slow) > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
+  if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS) {
+    s.hasRaisedCreep = true;
+    sink.setState('stalled', timeS);
+    s.stallReason = 'creeping';
+    sink.emit(timeS, 'stall', fastC, 'creeping');
+  }
+}
+
+function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: EventSink): void {
+  s.levelC = levelC;
+  s.cusumCS = 0;
+  s.residualMeanC = 0;
+  s.residualPowerC2 = NaN;
+  s.sagSinceS = NaN;
+  s.fallSinceS = NaN;
+  s.plateauCandidateS = NaN;
+  s.hasRaisedCreep = false;
+  s.creepSinceS = NaN;
+  s.stallReason = null;
+  sink.setState('plateau', timeS);
+  let receiver: number | undefined;
+  if (s.plan.length > 0) {
+    s.receiverIndex = Math.max(s.receiverIndex, windowIndexAt(s.plan, levelC));
+    receiver = s.plan[s.receiverIndex]?.receiver;
+  }
+  sink.emit(timeS, 'plateau', levelC, undefined, receiver);
+}
+
+function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: number, fastC: number, sink: EventSink): void {
+  const o = s.options;
+  const residualC = valueC - s.levelC;
+  if (Math.abs(fastC - s.levelC) < LEVEL_TRACK_C) s.levelC += -Math.expm1(-dtS / LEVEL_TAU_S) * (fastC - s.levelC);
+  if (Math.abs(residualC) < 2) {
+    s.residualMeanC += -Math.expm1(-dtS / RESIDUAL_TAU_S) * (residualC - s.residualMeanC);
+    const power = s.residualMeanC * s.residualMeanC;
+    s.residualPowerC2 = Number.isNaN(s.residualPowerC2) ? power : s.residualPowerC2 - Math.expm1(-dtS / RESIDUAL_POWER_TAU_S) * (power - s.residualPowerC2);
+  }
+  const whiteC2S = (Number.isNaN(s.innovationVarC2) ? 0 : s.innovationVarC2) * s.intervalS;
+  const wanderC2S = Number.isNaN(s.residualPowerC2) ? 0 : DIFFUSION_SAFETY * 2 * RESIDUAL_TAU_S * s.residualPowerC2;
+  const diffusionC2S = Math.max(DIFFUSION_FLOOR_C2S, whiteC2S, wanderC2S);
+  const thresholdCS = cusumThresholdForMeanTime(o.breakthroughReferenceC, diffusionC2S, o.targetFalseAlarmIntervalH * 3600);
+  s.cusumCS = Math.max(0, s.cusumCS + (residualC - o.breakthroughReferenceC) * dtS);
+  if (s.cusumCS >= thresholdCS && fastC - s.levelC >= o.breakthroughMinRiseC) {
+    let receiver: number | undefined;
+    if (s.plan.length > 0 && s.receiverIndex + 1 < s.plan.length) {
+      s.receiverIndex++;
+      receiver = s.plan[s.receiverIndex]!.receiver;
+    }
+    s.peakC = fastC;
+    s.plateauCandidateS = NaN;
+    s.fallSinceS = NaN;
+    sink.setState('leaving', timeS);
+    sink.emit(timeS, 'breakthrough', fastC, undefined, receiver);
+    return;
+  }
+  const interval = s.intervalS;
+  if (holdsFor(s, timeS, fastC < s.levelC - o.fallAwayC, Math.max(o.fallAwayHoldS, 1.5 * interval))) {
+    fallAway(s, timeS, fastC, sink);
+    return;
+  }
+  if (fastC < s.levelC - LONG_SAG_C) {
+    if (Number.isNaN(s.sagSinceS)) s.sagSinceS = timeS;
+    else if (timeS - s.sagSinceS >= LONG_SAG_S) fallAway(s, timeS, fastC, sink);
+  } else {
+    s.sagSinceS = NaN;
+  }
+}
+
+function fallAway(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
+  s.troughC = fastC;
+  s.fallSinceS = NaN;
+  s.sagSinceS = NaN;
+  sink.setState('stalled', timeS);
+  s.stallReason = 'falling-away';
+  sink.emit(timeS, 'stall', fastC, 'falling-away');
+}
+
+function watchRecovery(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
+  s.troughC = Math.min(s.troughC, fastC);
+  if (holdsFor(s, timeS, fastC >= s.troughC + RECOVERY_RISE_C, Math.max(RECOVERY_HOLD_S, 1.5 * s.intervalS))) {
+    s.fallSinceS = NaN;
+    s.stallReason = null;
+    s.peakC = fastC;
+    s.plateauCandidateS = NaN;
+    sink.setState('rising', timeS);
+  }
+}
+
+function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
+  const window = s.plan[s.receiverIndex];
+  if (window === undefined || s.receiverIndex + 1 >= s.plan.length || !(fastC >= window.toC + CUT_MARGIN_C)) {
+    s.cutSinceS = NaN;
+    return;
+  }
+  if (Number.isNaN(s.cutSinceS)) s.cutSinceS = timeS;
+  // Sparse (typed) readings cannot wait for a second one: the crossing itself is the cut.
+  if (timeS - s.cutSinceS < (s.intervalS >= CUT_HOLD_S ? 0 : CUT_HOLD_S)) return;
+  s.cutSinceS = NaN;
+  s.receiverIndex = Math.max(s.receiverIndex + 1, windowIndexAt(s.plan, fastC));
+  sink.emit(timeS, 'cut', fastC, undefined, s.plan[s.receiverIndex]!.receiver);
+}
+
+// An on-delay: `condition` must hold from `fallSinceS` for `holdS` (one timer: the states
+// that use it never need two at once).
+function holdsFor(s: WatcherState, timeS: number, condition: boolean, holdS: number): boolean {
+  if (!condition) {
+    s.fallSinceS = NaN;
+    return false;
+  }
+  if (Number.isNaN(s.fallSinceS)) s.fallSinceS = timeS;
+  return timeS - s.fallSinceS >= holdS;
+}

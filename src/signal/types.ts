@@ -1,0 +1,33 @@
+/** What the watcher can report. `cut` is raised only with a cut plan. */
+export type EventKind = 'vapour' | 'plateau' | 'breakthrough' | 'stall' | 'sensor-fault' | 'cut';
+
+/** Detector states, in the project's vocabulary. */
+export type WatchState = 'cold' | 'rising' | 'plateau' | 'leaving' | 'stalled' | 'fault';
+
+export type StallReason = 'no-vapour' | 'falling-away' | 'creeping';
+export type FaultReason = 'no-valid-readings' | 'open-thermocouple' | 'erratic';
+
+/** Why a reading carries no valid temperature: passed in, or found by the watcher. */
+export type InvalidReason = 'missing' | 'fault-code' | 'out-of-range';
+
+/** One receiver's head-temperature window, from the science core's planner. Units: degC. */
+export interface CutWindow {
+  receiver: number;
+  fromC: number;
+  toC: number;
+}
+
+export interface WatchEvent {
+  /** Time the event was raised (the latest reading). Units: s since heat on. */
+  timeS: number;
+  kind: EventKind;
+  /** Filtered head temperature; for `plateau` its level. Units: degC. */
+  headC: number;
+  /** An alarm needs the chemist to act; the rest is information, shown once. */
+  isAlarm: boolean;
+  /** What to do, in a few words (every alarm names its action). */
+  action: string;
+  reason?: StallReason | FaultReason;
+  /** With a plan: the receiver to change to (breakthrough, cut) or the one collecting (plateau). */
+  receiver?: number;
+}

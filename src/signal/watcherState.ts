@@ -1,0 +1,61 @@
+import { createEwRegression, type EwRegression } from './ewRegression.ts';
+import { createSpikeFilter, type SpikeFilter } from './spikeFilter.ts';
+import type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchState } from './types.ts';
+import type { WatcherOptions } from './watcherOptions.ts';
+
+/** Everything the watcher knows: plain data, so it saves as JSON and restores exactly. */
+export interface WatcherState {
+  version: 1;
+  options: WatcherOptions;
+  plan: CutWindow[];
+  state: WatchState;
+  stateSinceS: number;
+  stallReason: StallReason | null;
+  faultReason: FaultReason | null;
+  preFaultState: WatchState;
+  firstTimeS: number;
+  lastTimeS: number;
+  lastValidS: number;
+  lastAcceptedS: number;
+  latestInvalid: InvalidReason | null;
+  /** Running mean time between readings. Units: s. */
+  intervalS: number;
+  recoverCount: number;
+  spikes: SpikeFilter;
+  fast: EwRegression;
+  slow: EwRegression;
+  /** Running variance of one-step prediction errors of the fast filter. Units: degC^2. */
+  innovationVarC2: number;
+  baselineC: number;
+  vapourTimeS: number;
+  levelC: number;
+  plateauCandidateS: number;
+  peakC: number;
+  troughC: number;
+  fallSinceS: number;
+  sagSinceS: number;
+  cusumCS: number;
+  residualMeanC: number;
+  residualPowerC2: number;
+  hasRaisedNoVapour: boolean;
+  hasRaisedCreep: boolean;
+  /** Since when the head has climbed slowly without settling. Units: s. */
+  creepSinceS: number;
+  receiverIndex: number;
+  cutSinceS: number;
+  lastAlarmS: Partial<Record<EventKind, number>>;
+}
+
+export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): WatcherState {
+  return {
+    version: 1, options, plan,
+    state: 'cold', stateSinceS: NaN, stallReason: null, faultReason: null, preFaultState: 'cold',
+    firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
+    intervalS: NaN, recoverCount: 0,
+    spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30),
+    innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, plateauCandidateS: NaN,
+    peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
+    residualMeanC: 0, residualPowerC2: NaN,
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
+  };
+}
