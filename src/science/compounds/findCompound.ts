@@ -36,7 +36,8 @@ export function closestCompoundNames(query: string, extra: readonly Compound[] =
   for (const compound of [...extra, ...compoundLibrary]) {
     for (const k of keysOf(compound)) {
       const contains = key.length >= 3 && (k.includes(key) || key.includes(k));
-      const score = contains ? 0.5 : editDistance(key, k) / Math.max(key.length, k.length, 1);
+      const edit = editDistance(key, k) / Math.max(key.length, k.length, 1);
+      const score = contains ? Math.min(edit, 0.4) : edit;
       if (score < (scored.get(compound.name) ?? Infinity)) scored.set(compound.name, score);
     }
   }

@@ -19,7 +19,8 @@ describe('findCompound', () => {
   ])('findCompound(%j) finds %s', (query, name) => {
     expect(findCompound(query).name).toBe(name);
   });
-  it('findCompound("ethanoll") throws naming ethanol among the closest matches', () => {
+  it('findCompound("ethanoll") throws with ethanol as the closest match', () => {
+    expect(closestCompoundNames('ethanoll')[0]).toBe('ethanol');
     expect(() => findCompound('ethanoll')).toThrow(UnknownCompoundError);
     expect(() => findCompound('ethanoll')).toThrow(/ethanol/);
   });
