@@ -1,5 +1,14 @@
 import type { Command } from '../command.ts';
+import { bp } from './bp.ts';
+import { bubble, dew } from './equilibriumCommand.ts';
+import { plan } from './plan.ts';
+import { pressure } from './pressure.ts';
 
 // One line per command; each lives in its own file in this folder.
 export const commands: Command[] = [
+  bp,
+  bubble,
+  dew,
+  pressure,
+  plan,
 ];

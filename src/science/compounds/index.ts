@@ -1,0 +1,11 @@
+export type { Compound, Hazards } from './compound.ts';
+export type { VapourPressureCorrelation } from './vapourPressureCorrelation.ts';
+export { compoundLibrary } from './library.ts';
+export { findCompound, closestCompoundNames, UnknownCompoundError } from './findCompound.ts';
+export { normaliseName } from './normaliseName.ts';
+export { makeUserCompound, troutonEntropyJPerMolK, hydrogenBondedEntropyJPerMolK } from './userCompound.ts';
+export type { UserCompoundInput, UserAntoine } from './userCompound.ts';
+export { pSatPa, lnPSat, dLnPSatdT, vapourPressure, tSatK, clausiusClapeyronEnthalpyJPerMol, gasConstant } from './vapourPressure.ts';
+export type { VapourPressureResult, SaturationTemperature } from './vapourPressure.ts';
+export { normalBoilingPointK } from './normalBoilingPointK.ts';
+export { molarMassFromFormula } from './molarMassFromFormula.ts';

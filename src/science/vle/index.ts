@@ -1,0 +1,15 @@
+export type { ThermoModel } from './thermoModel.ts';
+export { prepareMixture } from './prepareMixture.ts';
+export type { PreparedMixture } from './prepareMixture.ts';
+export { prepareUnifac, prepareIdeal, MissingUnifacDataError } from './unifacModel.ts';
+export type { ActivityModel } from './unifacModel.ts';
+export { ConvergenceError } from './convergenceError.ts';
+export { bubbleT, dewT, bubbleP, dewP } from './equilibrium.ts';
+export type { EquilibriumResult } from './equilibrium.ts';
+export { binaryTxy } from './binaryTxy.ts';
+export type { BinaryCurve } from './binaryTxy.ts';
+export { relativeVolatility } from './relativeVolatility.ts';
+export { findAzeotropes } from './findAzeotropes.ts';
+export type { PairAzeotropes } from './findAzeotropes.ts';
+export { moleFractions, molesFromAmounts, fractionsOnBasis } from './composition.ts';
+export type { CompositionBasis } from './composition.ts';
