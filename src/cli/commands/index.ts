@@ -3,6 +3,7 @@ import { bp } from './bp.ts';
 import { bubble, dew } from './equilibriumCommand.ts';
 import { plan } from './plan.ts';
 import { pressure } from './pressure.ts';
+import { tc } from './tc.ts';
 
 // One line per command; each lives in its own file in this folder.
 export const commands: Command[] = [
@@ -11,4 +12,5 @@ export const commands: Command[] = [
   dew,
   pressure,
   plan,
+  tc,
 ];

@@ -1,0 +1,25 @@
+import { describe, expect, it } from 'vitest';
+import { checkTypedEntry } from '../../../src/sensor/protocols/typedReading.ts';
+
+describe('checkTypedEntry', () => {
+  it('checkTypedEntry stores an ordinary value in degC or degF (212 degF = 100 degC, exact)', () => {
+    expect(checkTypedEntry('78.5', 'C')).toEqual({ kind: 'ok', headC: 78.5 });
+    expect(checkTypedEntry('78,5', 'C')).toEqual({ kind: 'ok', headC: 78.5 });
+    const f = checkTypedEntry('212', 'F');
+    expect(f.kind === 'ok' && f.headC).toBeCloseTo(100, 12);
+  });
+
+  it('checkTypedEntry asks for confirmation outside the usual head range and on a big jump', () => {
+    expect(checkTypedEntry('785', 'C')).toMatchObject({ kind: 'confirm', headC: 785 });
+    expect(checkTypedEntry('-30', 'C').kind).toBe('confirm');
+    expect(checkTypedEntry('120', 'C', 60)).toMatchObject({ kind: 'confirm', reason: expect.stringMatching(/60 degC away/) });
+    expect(checkTypedEntry('80', 'C', 78).kind).toBe('ok');
+  });
+
+  it('checkTypedEntry rejects words, empty input and values below absolute zero', () => {
+    expect(checkTypedEntry('', 'C').kind).toBe('rejected');
+    expect(checkTypedEntry('abc', 'C').kind).toBe('rejected');
+    expect(checkTypedEntry('NaN', 'C').kind).toBe('rejected');
+    expect(checkTypedEntry('-500', 'F')).toMatchObject({ kind: 'rejected', reason: expect.stringMatching(/absolute zero/) });
+  });
+});
