@@ -7,3 +7,5 @@ export type {
 export { AlarmBook } from './alarmBook.ts';
 export type { Alarm, AlarmBookOptions, AlarmBookState, AlarmKind } from './alarmBook.ts';
 export { downsampleMinMax } from './downsample.ts';
+export { toRunPlan } from './runPlan.ts';
+export type { RunPlan, RunWindow } from './runPlan.ts';

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchChromium, phoneContext } from './support/browser.ts';
+import { startDemoRun } from './support/demoRun.ts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -23,8 +24,8 @@ it('starts and runs the simulated run with no network once the service worker co
 
   await context.setOffline(true);
   await page.reload();
-  await expect(page.getByRole('heading', { name: 'Watch' }).isVisible()).resolves.toBe(true);
-  await page.getByRole('button', { name: 'Start demo run' }).click();
+  await page.getByRole('heading', { name: 'Watch' }).waitFor();
+  await startDemoRun(page, 120);
   await page.waitForFunction(() => {
     const text = document.querySelector('[data-testid="elapsed"]')?.textContent;
     return text !== undefined && text !== '0:00';

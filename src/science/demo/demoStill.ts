@@ -11,6 +11,8 @@
  *
  * Pure: time comes in as the step length; no clock is read.
  */
+import { findCompound, pSatPa, type Compound } from '../compounds/index.ts';
+
 export interface DemoStillOptions {
   /** Room temperature. Units: degC */
   roomC?: number;
@@ -43,20 +45,13 @@ export interface DemoStillState {
   distilledMl: number;
 }
 
-/** Antoine constants, log10(P/Pa) = A - B/(T/K + C), and liquid properties of the demo pair. */
-const components = [
-  // Poling, Prausnitz, O'Connell, The Properties of Gases and Liquids 5th ed., App. A (ethyl ethanoate)
-  { name: 'ethyl acetate', a: 9.13361, b: 1195.13, c: -60.68, molarMassG: 88.11, densityGPerMl: 0.900 },
-  // Poling 5th ed., App. A (butyl ethanoate); molar masses and densities (from memory)
-  { name: 'butyl acetate', a: 9.5, b: 1596.7, c: -43.85, molarMassG: 116.16, densityGPerMl: 0.882 },
-] as const;
+// The demo pair from the compound library (vapour pressure from Poling 5th ed., see compounds/).
+const light = findCompound('ethyl acetate');
+const heavy = findCompound('n-butyl acetate');
+const components = [light, heavy] as const;
 
-const light = components[0];
-const heavy = components[1];
-
-function pSatPa(component: (typeof components)[number], tK: number): number {
-  return 10 ** (component.a - component.b / (tK + component.c));
-}
+/** Liquid molar volume near 20 degC. Units: mL/mol */
+const molarVolumeMl = (c: Compound) => ((c.molarMassKgPerMol ?? Number.NaN) / (c.liquidDensityKgPerM3 ?? Number.NaN)) * 1e6;
 
 /** Dew point of a binary vapour with light mole fraction y, by bisection on sum x = 1. */
 function dewPointK(y: number, pPa: number): number {
@@ -87,6 +82,7 @@ function bubblePointK(x: number, pPa: number): number {
 export const demoMixture = {
   title: 'ethyl acetate from butyl acetate',
   components: components.map((c) => c.name),
+  compounds: components,
   /** Charge: 30 mL of each. */
   chargeMl: [30, 30],
 };
@@ -113,8 +109,8 @@ export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStill
   const reflux = options.refluxRatio ?? 2;
   const warmUpS = options.columnWarmUpS ?? 360;
 
-  const lightMol = (demoMixture.chargeMl[0]! * light.densityGPerMl) / light.molarMassG;
-  const heavyMol = (demoMixture.chargeMl[1]! * heavy.densityGPerMl) / heavy.molarMassG;
+  const lightMol = demoMixture.chargeMl[0]! / molarVolumeMl(light);
+  const heavyMol = demoMixture.chargeMl[1]! / molarVolumeMl(heavy);
   const chargeMol = lightMol + heavyMol;
 
   let potMol = chargeMol;
@@ -155,8 +151,7 @@ export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStill
     potLight = (potMol * potLight - lightOut) / Math.max(potMol - dMol, 1e-12);
     potLight = Math.min(Math.max(potLight, 0), 1);
     potMol -= dMol;
-    distilledMl += lightOut * (light.molarMassG / light.densityGPerMl)
-      + (dMol - lightOut) * (heavy.molarMassG / heavy.densityGPerMl);
+    distilledMl += lightOut * molarVolumeMl(light) + (dMol - lightOut) * molarVolumeMl(heavy);
     const vapourC = dewPointK(distLight, pressurePa) - 273.15;
     headC += (vapourC - headC) * (1 - Math.exp(-dtS / bulbTauVapourS));
     if (potMol <= 0.021 * chargeMol) phase = 'dry';

@@ -1,2 +1,3 @@
 export { createDemoStill, demoMixture } from './demoStill.ts';
 export type { DemoStill, DemoStillOptions, DemoStillSnapshot, DemoStillState, DemoPhase } from './demoStill.ts';
+export { demoCutPlan } from './demoPlan.ts';

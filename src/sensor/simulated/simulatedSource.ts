@@ -24,6 +24,7 @@ export interface SimulatedSourceOptions {
  * in batches on a real-time tick; each carries its simulated time.
  */
 export class SimulatedSource {
+  readonly kind = 'simulated';
   readonly label = 'Simulated run (demo)';
   #still: DemoStill;
   #clock: Clock;

@@ -1,34 +1,80 @@
+import { useState } from 'preact/hooks';
 import { headRateCPerMin } from '../../run/index.ts';
-import { demoMixture } from '../../science/demo/index.ts';
-import { TraceChart } from '../chart/TraceChart.tsx';
+import type { RunSession } from '../../session/index.ts';
+import { TraceChart, type TemperatureBand, type TraceMarker } from '../chart/TraceChart.tsx';
+import { ConfirmDialog } from '../common/ConfirmDialog.tsx';
+import { TextDialog } from '../common/TextDialog.tsx';
+import { useSessionVersion } from '../useSession.ts';
 import { formatElapsed, formatHeadC, formatRate } from './format.ts';
-import type { LiveRun } from './useLiveRun.ts';
+import { stateWords } from './stateWords.ts';
 
-const speeds = [1, 10, 30, 120];
+interface PlanWindow {
+  receiver: number;
+  fromC: number;
+  toC: number;
+}
 
-/** The live run: head temperature large enough to read from across the hood, rate, time, trace. */
-export function WatchScreen({ run }: { run: LiveRun }) {
-  const { readings } = run;
+function planWindows(plan: unknown): PlanWindow[] {
+  const windows = (plan as { windows?: PlanWindow[] } | null)?.windows;
+  return Array.isArray(windows) ? windows : [];
+}
+
+interface WatchScreenProps {
+  session: RunSession;
+  backgroundNotice: string | null;
+  onDismissBackgroundNotice(): void;
+  onEnded(): void;
+}
+
+/** The live run: what a chemist glances at from across the hood, and the few taps they need. */
+export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNotice, onEnded }: WatchScreenProps) {
+  const version = useSessionVersion(session);
+  const [dialog, setDialog] = useState<'end' | 'note' | 'heat' | null>(null);
+  const { readings, header } = session;
   const n = readings.length;
   const elapsedS = n > 0 ? readings.timeS[n - 1]! : 0;
   const headC = readings.lastValidHeadC();
   const rate = n > 1 ? headRateCPerMin(readings.timeS, readings.headC, 60) : Number.NaN;
+  const windows = planWindows(header.plan);
+  const receiver = session.receiver;
+  const current = windows.find((w) => w.receiver === receiver);
+  const nextCut = windows.find((w) => w.receiver === receiver + 1);
+  const hasVapour = header.events.some((e) => e.event === 'vapour');
+  const bands: TemperatureBand[] = windows.map((w) => ({ fromC: w.fromC, toC: w.toC, label: `receiver ${w.receiver}` }));
+  const markers: TraceMarker[] = [
+    ...header.receivers.filter((r) => r.receiver > 1).map((r) => ({ timeS: r.time_s, label: `receiver ${r.receiver}` })),
+    ...header.events.filter((e) => e.event === 'breakthrough' || e.event === 'vapour').map((e) => ({ timeS: e.time_s, label: e.event })),
+  ];
 
   return (
     <section class="watch" aria-labelledby="watch-title">
       <h1 id="watch-title" class="screen-title">Watch</h1>
       <p class="source-line">
-        <span class="source-dot" data-live={run.status === 'running'} aria-hidden="true" />
-        {run.sourceLabel}: {demoMixture.title}
+        <span class="source-dot" data-live={!session.isEnded} aria-hidden="true" />
+        {session.source?.label ?? 'No sensor connected'}: {header.title}
       </p>
 
-      <div class="head-readout" aria-live="off">
+      <div class="head-readout">
         <span class="head-label">Head temperature</span>
         <span class="head-value" data-testid="head-temp">
           {formatHeadC(headC)}
           <span class="head-unit">°C</span>
         </span>
+        <span class="head-state" data-testid="watch-state">{stateWords(session.watcherState, session.plateauC, hasVapour)}</span>
       </div>
+
+      {session.storageError && <p class="warning" role="alert">{session.storageError}</p>}
+      {backgroundNotice && (
+        <p class="warning" role="status">
+          {backgroundNotice}{' '}
+          <button type="button" class="link-button" onClick={onDismissBackgroundNotice}>OK</button>
+        </p>
+      )}
+      {header.gaps.length > 0 && (
+        <p class="notice" data-testid="gap-notice">
+          Run reopened: no readings from {formatElapsed(header.gaps.at(-1)!.from_s)} to {formatElapsed(header.gaps.at(-1)!.to_s)}.
+        </p>
+      )}
 
       <dl class="figures">
         <div>
@@ -39,36 +85,67 @@ export function WatchScreen({ run }: { run: LiveRun }) {
           <dt>Since heat on</dt>
           <dd data-testid="elapsed">{formatElapsed(elapsedS)}</dd>
         </div>
+        <div>
+          <dt>Receiver</dt>
+          <dd data-testid="receiver">
+            {receiver}
+            {current && <small> {current.fromC.toFixed(0)}–{current.toC.toFixed(0)} °C</small>}
+          </dd>
+        </div>
+        <div>
+          <dt>Next cut</dt>
+          <dd>{nextCut ? <>{nextCut.fromC.toFixed(1)} <small>°C</small></> : <small>when it rises</small>}</dd>
+        </div>
       </dl>
 
-      <TraceChart readings={readings} version={run.version} />
-
-      <div class="actions">
-        {run.status === 'running' ? (
-          <button type="button" class="action action-end" onClick={() => confirm('End this run?') && run.end()}>
-            End run
+      {!session.isEnded && (
+        <div class="run-actions">
+          <button type="button" class="action action-start" onClick={() => session.changeReceiver()}>
+            Receiver changed → {receiver + 1}
           </button>
-        ) : (
-          <button type="button" class="action action-start" onClick={run.start}>
-            {run.status === 'ended' ? 'Start a new demo run' : 'Start demo run'}
-          </button>
-        )}
-      </div>
+          <div class="action-row">
+            <button type="button" class="action action-quiet" onClick={() => setDialog('heat')}>Heat changed</button>
+            <button type="button" class="action action-quiet" onClick={() => setDialog('note')}>Note</button>
+          </div>
+        </div>
+      )}
 
-      <fieldset class="speed">
-        <legend>Demo speed</legend>
-        {speeds.map((s) => (
-          <label key={s} class="speed-option">
-            <input type="radio" name="speed" value={s} checked={run.speed === s} onChange={() => run.setSpeed(s)} />
-            <span>{s}×</span>
-          </label>
-        ))}
-      </fieldset>
+      <TraceChart readings={readings} version={version} windowS={600} bands={bands} markers={markers} label="Last 10 minutes" />
+      <TraceChart readings={readings} version={version} bands={bands} markers={markers} height={140} label="Whole run" />
+
+      {!session.isEnded && (
+        <button type="button" class="action action-end" onClick={() => setDialog('end')}>End run</button>
+      )}
 
       <p class="caution">
-        Cutbell assists; it does not replace your lab's procedures or local regulations. Never heat a closed
-        system, and never distil to dryness.
+        Cutbell assists; it does not replace your lab's procedures or local regulations. Stop heating with liquid
+        still in the pot: never distil to dryness.
       </p>
+
+      {dialog === 'end' && (
+        <ConfirmDialog
+          title="End this run?"
+          body="Readings stop being recorded. Turn the heat off first, and leave the apparatus to cool before you take it apart."
+          confirmLabel="End run"
+          onCancel={() => setDialog(null)}
+          onConfirm={() => {
+            setDialog(null);
+            void session.end().then(onEnded);
+          }}
+        />
+      )}
+      {dialog === 'note' && (
+        <TextDialog title="Note" placeholder="What you saw" saveLabel="Save note" onCancel={() => setDialog(null)} onSave={(text) => {
+          session.addNote(text);
+          setDialog(null);
+        }} />
+      )}
+      {dialog === 'heat' && (
+        <TextDialog title="Heat changed" placeholder="e.g. mantle up to 6" saveLabel="Save" onCancel={() => setDialog(null)} onSave={(text) => {
+          session.heatChanged(text);
+          setDialog(null);
+        }} />
+      )}
     </section>
   );
 }

@@ -1,0 +1,39 @@
+import type { Advice, CutPlan } from '../science/index.ts';
+
+/** One receiver's head-temperature window as the live run uses it. Units: degC */
+export interface RunWindow {
+  receiver: number;
+  fromC: number;
+  toC: number;
+  /** The compound of a main cut, or null for an intermediate cut. */
+  compound: string | null;
+  /** Expected volume, or null when a density is unknown. Units: mL */
+  volumeMl: number | null;
+}
+
+/** The plan kept in the run record: receiver windows, the planner's advice, and its basis. */
+export interface RunPlan {
+  windows: RunWindow[];
+  advice: Advice[];
+  pressurePa: number;
+  plates: number;
+  /** Some result rests on an estimated property (a user compound's vapour pressure). */
+  isEstimated: boolean;
+}
+
+/** Converts the science core's cut plan to the run's plan (degC, mL) at the edge. */
+export function toRunPlan(plan: CutPlan, pressurePa: number, plates: number): RunPlan {
+  return {
+    windows: plan.fractions.map((f) => ({
+      receiver: f.receiver,
+      fromC: f.fromTK - 273.15,
+      toC: f.toTK - 273.15,
+      compound: f.compound,
+      volumeMl: Number.isFinite(f.volumeM3) ? f.volumeM3 * 1e6 : null,
+    })),
+    advice: plan.advice,
+    pressurePa,
+    plates,
+    isEstimated: plan.isEstimated,
+  };
+}

@@ -1,0 +1,75 @@
+import type { Settings } from '../../store/index.ts';
+import type { AppServices } from '../services.ts';
+
+interface SettingsScreenProps {
+  settings: Settings;
+  services: AppServices;
+  onChange(settings: Settings): void;
+}
+
+const demoSpeeds = [1, 10, 30, 120, 600];
+
+/** Voice, sound and vibration on or off, each testable here before a run needs it. */
+export function SettingsScreen({ settings, services, onChange }: SettingsScreenProps) {
+  const { alerter, notifier } = services;
+  const speech = alerter.channels.speech;
+  const toggle = (key: 'speech' | 'sound' | 'vibration') => onChange({ ...settings, [key]: !settings[key] });
+
+  return (
+    <section class="settings" aria-labelledby="settings-title">
+      <h1 id="settings-title" class="screen-title">Settings</h1>
+
+      <h2>Alarms</h2>
+      <label class="switch">
+        <input type="checkbox" checked={settings.speech} onChange={() => toggle('speech')} />
+        <span>Speak alarms</span>
+      </label>
+      <p class="hint">
+        {!speech.isAvailable
+          ? 'This browser cannot speak.'
+          : speech.hasOfflineVoice
+            ? 'An offline voice is installed.'
+            : 'No offline voice found: speech may need a network. Install a voice in the phone’s text-to-speech settings.'}
+      </p>
+      <label class="switch">
+        <input type="checkbox" checked={settings.sound} onChange={() => toggle('sound')} />
+        <span>Alarm tones</span>
+      </label>
+      <label class="switch">
+        <input type="checkbox" checked={settings.vibration} onChange={() => toggle('vibration')} />
+        <span>Vibrate</span>
+      </label>
+      <div class="action-row">
+        <button
+          type="button"
+          class="action action-quiet"
+          onClick={() => {
+            void alerter.unlock().then(() => alerter.alarm({ id: 'test', message: 'This is a test alarm', action: 'No action needed' }));
+          }}
+        >
+          Test alarm
+        </button>
+        <button
+          type="button"
+          class="action action-quiet"
+          disabled={notifier.permission !== 'default'}
+          onClick={() => void notifier.ask().then(() => onChange({ ...settings }))}
+        >
+          {notifier.permission === 'granted' ? 'Notifications on' : notifier.permission === 'denied' ? 'Notifications blocked' : 'Allow notifications'}
+        </button>
+      </div>
+      <p class="hint">Notifications reach you when Cutbell is hidden. Keep the app in front with the screen on during a run: a phone may pause hidden pages.</p>
+
+      <h2>Demo</h2>
+      <fieldset class="speed">
+        <legend>Demo speed</legend>
+        {demoSpeeds.map((s) => (
+          <label key={s} class="speed-option">
+            <input type="radio" name="speed" value={s} checked={settings.demoSpeed === s} onChange={() => onChange({ ...settings, demoSpeed: s })} />
+            <span>{s}×</span>
+          </label>
+        ))}
+      </fieldset>
+    </section>
+  );
+}
