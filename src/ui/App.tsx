@@ -209,6 +209,11 @@ export function App({ services, updates }: AppProps) {
           alarm={alarm}
           waiting={standing.length - 1}
           isSnoozed={isSnoozed}
+          primary={
+            alarm.kind === 'change-receiver' && session
+              ? { label: `Receiver changed → ${session.receiver + 1}`, run: () => session.changeReceiver() }
+              : undefined
+          }
           onAcknowledge={() => session?.acknowledge(alarm.id)}
           onSnooze={() => session?.snooze(alarm.id)}
         />

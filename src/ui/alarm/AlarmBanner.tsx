@@ -5,6 +5,8 @@ interface AlarmBannerProps {
   /** More alarms waiting behind this one. */
   waiting: number;
   isSnoozed: boolean;
+  /** The action itself, when one tap can do it (recording the receiver change). */
+  primary?: { label: string; run(): void };
   onAcknowledge(): void;
   onSnooze(): void;
 }
@@ -20,7 +22,7 @@ const kindTitle: Record<Alarm['kind'], string> = {
  * A standing alarm fills the screen: a symbol and words as well as colour, the action in large
  * type, one large acknowledge target reachable with a gloved thumb, and a snooze.
  */
-export function AlarmBanner({ alarm, waiting, isSnoozed, onAcknowledge, onSnooze }: AlarmBannerProps) {
+export function AlarmBanner({ alarm, waiting, isSnoozed, primary, onAcknowledge, onSnooze }: AlarmBannerProps) {
   if (isSnoozed) {
     return (
       <div class="alarm-strip" role="status" data-kind={alarm.kind}>
@@ -40,7 +42,14 @@ export function AlarmBanner({ alarm, waiting, isSnoozed, onAcknowledge, onSnooze
       <p class="alarm-message">{alarm.message}</p>
       <p class="alarm-action" id="alarm-action">{alarm.action}</p>
       {waiting > 0 && <p class="alarm-waiting">{waiting} more alarm{waiting > 1 ? 's' : ''} waiting</p>}
-      <button type="button" class="alarm-ack" onClick={onAcknowledge}>Acknowledge</button>
+      {primary ? (
+        <>
+          <button type="button" class="alarm-ack" onClick={primary.run}>{primary.label}</button>
+          <button type="button" class="alarm-snooze" onClick={onAcknowledge}>Acknowledge only</button>
+        </>
+      ) : (
+        <button type="button" class="alarm-ack" onClick={onAcknowledge}>Acknowledge</button>
+      )}
       <button type="button" class="alarm-snooze" onClick={onSnooze}>Snooze 3 min</button>
     </div>
   );

@@ -1,0 +1,54 @@
+import { afterAll, beforeAll, expect, inject, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { launchChromium, phoneContext } from './support/browser.ts';
+import { recordAlertsScript, startDemoRun } from './support/demoRun.ts';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+const spoken = (page: Page) => page.evaluate(() => (window as unknown as { __spoken: string[] }).__spoken);
+
+it('goes through vapour, plateau, a breakthrough alarm, receiver 2 and the end, offline, without chattering', async () => {
+  const context = await phoneContext(browser);
+  await context.addInitScript(recordAlertsScript);
+  const page = await context.newPage();
+  await page.goto(inject('baseUrl'));
+  await page.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+  });
+  await page.reload();
+  await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
+  await context.setOffline(true);
+  await page.reload();
+
+  await startDemoRun(page, 600);
+  await page.waitForFunction(() => /Steady at/.test(document.querySelector('[data-testid="watch-state"]')?.textContent ?? ''), null, { timeout: 30_000 });
+  expect(await spoken(page)).toEqual(expect.arrayContaining(['Vapour has reached the thermometer']));
+  expect((await spoken(page)).some((s) => s.startsWith('Steady at 77'))).toBe(true);
+
+  // The cut: a full-screen alarm in words and a symbol, spoken and sounded through its adapters.
+  const banner = page.getByRole('alertdialog');
+  await banner.waitFor({ timeout: 30_000 });
+  expect(await banner.textContent()).toMatch(/Change to receiver 2/);
+  expect((await spoken(page)).filter((s) => /Change to receiver 2/.test(s)).length).toBeGreaterThanOrEqual(1);
+  expect(await page.evaluate(() => (window as unknown as { __tones: number }).__tones)).toBeGreaterThan(0);
+
+  await banner.getByRole('button', { name: 'Receiver changed → 2' }).click();
+  await expect(banner.count()).resolves.toBe(0);
+  expect((await page.getByTestId('receiver').textContent())?.startsWith('2')).toBe(true);
+
+  // No alarm chatters: a kind is never said three times within a minute of real time.
+  const alarmsSaid = (await spoken(page)).filter((s) => /Change to receiver/.test(s));
+  expect(alarmsSaid.length).toBeLessThan(3);
+
+  await page.getByRole('button', { name: 'End run' }).click();
+  await page.getByRole('dialog').getByRole('button', { name: 'End run' }).click();
+  await page.getByRole('heading', { name: 'Run ended' }).waitFor();
+  expect(await page.evaluate(() => navigator.onLine)).toBe(false);
+  await context.close();
+});
