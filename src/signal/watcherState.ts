@@ -35,7 +35,6 @@ export interface WatcherState {
   fallSinceS: number;
   sagSinceS: number;
   cusumCS: number;
-  residualMeanC: number;
   residualPowerC2: number;
   hasRaisedNoVapour: boolean;
   hasRaisedCreep: boolean;
@@ -55,7 +54,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): 
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30),
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
-    residualMeanC: 0, residualPowerC2: NaN,
+    residualPowerC2: NaN,
     hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
   };
 }
