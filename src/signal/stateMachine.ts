@@ -110,6 +110,7 @@ function watchRising(s: WatcherState, timeS: number, fastC: number, sink: EventS
 
 function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: EventSink): void {
   s.levelC = levelC;
+  s.levelCount = 1;
   s.cusumCS = 0;
   s.residualPowerC2 = NaN;
   s.sagSinceS = NaN;
@@ -130,7 +131,13 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
 function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: number, fastC: number, sink: EventSink): void {
   const o = s.options;
   const residualC = valueC - s.levelC;
-  if (Math.abs(fastC - s.levelC) < LEVEL_TRACK_C) s.levelC += -Math.expm1(-dtS / LEVEL_TAU_S) * (fastC - s.levelC);
+  if (Math.abs(fastC - s.levelC) < LEVEL_TRACK_C) {
+    // A running mean of the plateau's readings at first (the level is entered while the bulb
+    // still settles, and typed readings are few), then a slow follower of its creep.
+    s.levelCount++;
+    const gain = Math.max(1 / s.levelCount, -Math.expm1(-dtS / LEVEL_TAU_S));
+    s.levelC += gain * (valueC - s.levelC);
+  }
   // The wander of the smoothed head about its level, away from sags and rises (which are
   // the signal, and would raise the threshold just when it matters).
   const offsetC = fastC - s.levelC;

@@ -29,6 +29,8 @@ export interface WatcherState {
   baselineC: number;
   vapourTimeS: number;
   levelC: number;
+  /** Readings averaged into the level so far. */
+  levelCount: number;
   plateauCandidateS: number;
   peakC: number;
   troughC: number;
@@ -52,7 +54,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): 
     firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
     intervalS: NaN, recoverCount: 0,
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30),
-    innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, plateauCandidateS: NaN,
+    innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN,
     hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
