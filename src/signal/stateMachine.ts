@@ -19,8 +19,8 @@ const LEVEL_TRACK_C = 0.5;
 const RESIDUAL_POWER_TAU_S = 600;
 /** Offsets beyond this are sag or breakthrough, not wander. Units: degC. */
 const WANDER_BAND_C = 0.6;
-/** Correlation time taken for the wander (hood draughts, tens of seconds; common practice
- * has no figure, so the benchmark's slowest draught sets it). Units: s. */
+/** Correlation time taken for the wander (hood draughts, tens of seconds). No published
+ * figure: chosen on the benchmark (draughts of 20-90 s there), trading latency for alarms. */
 const WANDER_TAU_S = 40;
 /** Safety factor on the long-run variance (a short, band-limited estimate runs low). */
 const DIFFUSION_SAFETY = 1.5;
