@@ -47,7 +47,7 @@ for (const detector of detectors) {
 // Throughput: 8 h at 10 Hz.
 const long = syntheticTruth({
   roomC: 21, vapourArrivalS: 900, arrivalTauS: 10, components: ['a', 'b', 'c'],
-  plateaus: [{ levelC: 56, durationS: 9000, creepC: 0.4, sagC: 2, sagS: 60, riseS: 300 }, { levelC: 78, durationS: 9000, riseS: 300 }, { levelC: 100, durationS: 8600 }],
+  plateaus: [{ levelC: 56, durationS: 9000, creepC: 0.4, sagC: 2, sagS: 60, riseS: 300 }, { levelC: 78, durationS: 9000, riseS: 300 }, { levelC: 100, durationS: 10000 }],
 });
 const trace = sensorReadings(long.timeS, long.headC, { seed: 7, intervalS: 0.1, noiseSdC: 0.2, quantumC: 0.25, spikesPerHour: 10, draftSdC: 0.1 });
 const n = Math.min(288000, trace.timeS.length);

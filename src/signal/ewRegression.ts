@@ -38,7 +38,7 @@ export function ewRegressionAdd(r: EwRegression, timeS: number, valueC: number):
 export function ewRegressionSlope(r: EwRegression): number {
   const det = r.w * r.tt - r.t * r.t;
   // A few points packed within a fraction of a second give no slope worth trusting.
-  if (!(det > 1e-9 * r.w * r.w) || r.w < 2) return 0;
+  if (!(det > 1e-9 * r.w * r.w) || r.w < 1.5) return 0;
   return (r.w * r.ty - r.t * r.y) / det;
 }
 
@@ -46,7 +46,7 @@ export function ewRegressionSlope(r: EwRegression): number {
 export function ewRegressionLevel(r: EwRegression): number {
   if (!(r.w > 0)) return NaN;
   const det = r.w * r.tt - r.t * r.t;
-  if (!(det > 1e-9 * r.w * r.w) || r.w < 2) return r.y / r.w;
+  if (!(det > 1e-9 * r.w * r.w) || r.w < 1.5) return r.y / r.w;
   return (r.tt * r.y - r.t * r.ty) / det;
 }
 

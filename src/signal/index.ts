@@ -3,6 +3,7 @@ export { RunWatcher } from './runWatcher.ts';
 export { analyzeReadings } from './analyzeReadings.ts';
 export { resolveWatcherOptions, defaultWatcherOptions, type WatcherOptions } from './watcherOptions.ts';
 export { normaliseCutPlan } from './cutPlan.ts';
+export { parseCutPlan } from './parseCutPlan.ts';
 export { cusumThresholdForMeanTime, cusumMeanTimeToFalseAlarmS } from './cusumThreshold.ts';
 export type { WatcherState } from './watcherState.ts';
 export type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchEvent, WatchState } from './types.ts';

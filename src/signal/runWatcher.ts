@@ -1,6 +1,6 @@
 import { actionFor, isAlarmKind } from './alarmText.ts';
 import { normaliseCutPlan } from './cutPlan.ts';
-import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope } from './ewRegression.ts';
+import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
 import { onAcceptedReading } from './stateMachine.ts';
 import { spikeFilterPush, spikeFilterReset } from './spikeFilter.ts';
 import { watcherStateFromJson, watcherStateToJson } from './stateJson.ts';
@@ -14,6 +14,8 @@ const RECOVER_READINGS = 3;
 const ERRATIC_CLEAR_S = 60;
 /** Prediction errors beyond this are changes, not noise. Units: degC. */
 const INNOVATION_CLIP_C = 2;
+/** A reading this far from the slow fit restarts it. Units: degC. */
+const SLOW_RESTART_C = 3;
 
 /**
  * The run watcher: fed one reading at a time, it follows the head temperature through the
@@ -166,7 +168,9 @@ export class RunWatcher {
       }
     }
     ewRegressionAdd(s.fast, timeS, valueC);
-    ewRegressionAdd(s.slow, timeS, valueC);
+    // After a clear change of course the old readings only bias the slope that says "steady".
+    if (s.slow.w > 0 && Math.abs(valueC - ewRegressionLevel(s.slow)) > SLOW_RESTART_C) restartEwRegression(s.slow, timeS, valueC);
+    else ewRegressionAdd(s.slow, timeS, valueC);
     onAcceptedReading(s, timeS, valueC, Math.min(dtS, 3 * interval), this);
   }
 

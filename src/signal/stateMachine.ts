@@ -15,12 +15,15 @@ const BASELINE_TAU_S = 300;
 /** A plateau level follows a slow creep inside +-0.5 degC with this time constant. Units: s. */
 const LEVEL_TAU_S = 600;
 const LEVEL_TRACK_C = 0.5;
-/** Low-pass of the plateau residual whose power estimates the noise's long-run variance. */
-const RESIDUAL_TAU_S = 60;
-const RESIDUAL_POWER_TAU_S = 900;
-/** Safety factor on the estimated long-run variance (the estimate is short and biased low
- * for wander slower than RESIDUAL_TAU_S). */
-const DIFFUSION_SAFETY = 2;
+/** The smoothed head's variance about the level is averaged over this time. Units: s. */
+const RESIDUAL_POWER_TAU_S = 600;
+/** Offsets beyond this are sag or breakthrough, not wander. Units: degC. */
+const WANDER_BAND_C = 0.6;
+/** Correlation time taken for the wander (hood draughts, tens of seconds). No published
+ * figure: chosen on the benchmark (draughts of 20-90 s there), trading latency for alarms. */
+const WANDER_TAU_S = 40;
+/** Safety factor on the long-run variance (a short, band-limited estimate runs low). */
+const DIFFUSION_SAFETY = 1.5;
 /** Least long-run variance assumed: a hood draught of 0.1 degC sd over 30 s. Units: degC^2 s. */
 const DIFFUSION_FLOOR_C2S = 2 * 0.1 * 0.1 * 30;
 /** A sag 1.5 degC below the level that lasts this long is heat too low, not a pre-cut sag. */
@@ -107,8 +110,8 @@ function watchRising(s: WatcherState, timeS: number, fastC: number, sink: EventS
 
 function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: EventSink): void {
   s.levelC = levelC;
+  s.levelCount = 1;
   s.cusumCS = 0;
-  s.residualMeanC = 0;
   s.residualPowerC2 = NaN;
   s.sagSinceS = NaN;
   s.fallSinceS = NaN;
@@ -128,14 +131,22 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
 function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: number, fastC: number, sink: EventSink): void {
   const o = s.options;
   const residualC = valueC - s.levelC;
-  if (Math.abs(fastC - s.levelC) < LEVEL_TRACK_C) s.levelC += -Math.expm1(-dtS / LEVEL_TAU_S) * (fastC - s.levelC);
-  if (Math.abs(residualC) < 2) {
-    s.residualMeanC += -Math.expm1(-dtS / RESIDUAL_TAU_S) * (residualC - s.residualMeanC);
-    const power = s.residualMeanC * s.residualMeanC;
+  if (Math.abs(fastC - s.levelC) < LEVEL_TRACK_C) {
+    // A running mean of the plateau's readings at first (the level is entered while the bulb
+    // still settles, and typed readings are few), then a slow follower of its creep.
+    s.levelCount++;
+    const gain = Math.max(1 / s.levelCount, -Math.expm1(-dtS / LEVEL_TAU_S));
+    s.levelC += gain * (valueC - s.levelC);
+  }
+  // The wander of the smoothed head about its level, away from sags and rises (which are
+  // the signal, and would raise the threshold just when it matters).
+  const offsetC = fastC - s.levelC;
+  if (Math.abs(offsetC) < WANDER_BAND_C) {
+    const power = offsetC * offsetC;
     s.residualPowerC2 = Number.isNaN(s.residualPowerC2) ? power : s.residualPowerC2 - Math.expm1(-dtS / RESIDUAL_POWER_TAU_S) * (power - s.residualPowerC2);
   }
   const whiteC2S = (Number.isNaN(s.innovationVarC2) ? 0 : s.innovationVarC2) * s.intervalS;
-  const wanderC2S = Number.isNaN(s.residualPowerC2) ? 0 : DIFFUSION_SAFETY * 2 * RESIDUAL_TAU_S * s.residualPowerC2;
+  const wanderC2S = Number.isNaN(s.residualPowerC2) ? 0 : DIFFUSION_SAFETY * 2 * WANDER_TAU_S * s.residualPowerC2;
   const diffusionC2S = Math.max(DIFFUSION_FLOOR_C2S, whiteC2S, wanderC2S);
   const thresholdCS = cusumThresholdForMeanTime(o.breakthroughReferenceC, diffusionC2S, o.targetFalseAlarmIntervalH * 3600);
   s.cusumCS = Math.max(0, s.cusumCS + (residualC - o.breakthroughReferenceC) * dtS);

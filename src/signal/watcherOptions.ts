@@ -34,7 +34,7 @@ export interface WatcherOptions {
 }
 
 export const defaultWatcherOptions: Readonly<WatcherOptions> = Object.freeze({
-  targetFalseAlarmIntervalH: 500,
+  targetFalseAlarmIntervalH: 200,
   breakthroughReferenceC: 0.5,
   breakthroughMinRiseC: 1.0,
   vapourRiseC: 6,

@@ -29,13 +29,14 @@ export interface WatcherState {
   baselineC: number;
   vapourTimeS: number;
   levelC: number;
+  /** Readings averaged into the level so far. */
+  levelCount: number;
   plateauCandidateS: number;
   peakC: number;
   troughC: number;
   fallSinceS: number;
   sagSinceS: number;
   cusumCS: number;
-  residualMeanC: number;
   residualPowerC2: number;
   hasRaisedNoVapour: boolean;
   hasRaisedCreep: boolean;
@@ -53,9 +54,9 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): 
     firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
     intervalS: NaN, recoverCount: 0,
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30),
-    innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, plateauCandidateS: NaN,
+    innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
-    residualMeanC: 0, residualPowerC2: NaN,
+    residualPowerC2: NaN,
     hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
   };
 }

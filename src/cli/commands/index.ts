@@ -1,4 +1,5 @@
 import type { Command } from '../command.ts';
+import { analyze } from './analyze.ts';
 import { bp } from './bp.ts';
 import { bubble, dew } from './equilibriumCommand.ts';
 import { plan } from './plan.ts';
@@ -7,6 +8,7 @@ import { tc } from './tc.ts';
 
 // One line per command; each lives in its own file in this folder.
 export const commands: Command[] = [
+  analyze,
   bp,
   bubble,
   dew,

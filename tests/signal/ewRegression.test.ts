@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import { createEwRegression, ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from '../../src/signal/ewRegression.ts';
+
+describe('ewRegression', () => {
+  it('ewRegression on an exact line at irregular times returns its slope and current value', () => {
+    const r = createEwRegression(10);
+    let t = 1000;
+    for (let i = 0; i < 50; i++) {
+      t += 0.3 + (i % 7) * 0.4;
+      ewRegressionAdd(r, t, 20 + 0.05 * t);
+    }
+    expect(ewRegressionSlope(r)).toBeCloseTo(0.05, 9);
+    expect(ewRegressionLevel(r)).toBeCloseTo(20 + 0.05 * t, 7);
+  });
+  it('ewRegression with one reading has level = reading and slope 0; empty has NaN level', () => {
+    const r = createEwRegression(5);
+    expect(Number.isNaN(ewRegressionLevel(r))).toBe(true);
+    ewRegressionAdd(r, 3, 42);
+    expect(ewRegressionLevel(r)).toBe(42);
+    expect(ewRegressionSlope(r)).toBe(0);
+  });
+  it('restartEwRegression forgets the past', () => {
+    const r = createEwRegression(100);
+    for (let t = 0; t < 20; t++) ewRegressionAdd(r, t, 20);
+    restartEwRegression(r, 20, 80);
+    ewRegressionAdd(r, 21, 81);
+    expect(ewRegressionSlope(r)).toBeCloseTo(1, 9);
+  });
+});

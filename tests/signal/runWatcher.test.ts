@@ -1,0 +1,167 @@
+import { describe, expect, it } from 'vitest';
+import { handReadings, sensorReadings, type SensorOptions } from '../../src/science/sensorModel/index.ts';
+import { analyzeReadings, RunWatcher, type WatchEvent } from '../../src/signal/index.ts';
+import { syntheticTruth, type SyntheticProfile } from '../support/syntheticTruth.ts';
+
+// Demo scenarios (invented numbers), shaped as the trade describes a run.
+const twoCuts: SyntheticProfile = {
+  roomC: 21, vapourArrivalS: 600, arrivalTauS: 8,
+  plateaus: [{ levelC: 56, durationS: 1500, creepC: 0.3, sagC: 2.5, sagS: 60, riseS: 240 }, { levelC: 99.5, durationS: 1200 }],
+};
+const truth = syntheticTruth(twoCuts);
+
+function read(options: Partial<SensorOptions>, profile = truth): { timeS: Float64Array; headC: Float64Array } {
+  const r = sensorReadings(profile.timeS, profile.headC, { seed: 21, intervalS: 1, noiseSdC: 0.1, ...options });
+  return { timeS: r.timeS, headC: r.headC };
+}
+const kinds = (events: WatchEvent[]): string[] => events.map((e) => (e.reason ? `${e.kind}:${e.reason}` : e.kind));
+const alarmsOf = (events: WatchEvent[]): WatchEvent[] => events.filter((e) => e.isAlarm);
+
+describe('RunWatcher', () => {
+  it('analyzeReadings(two-cut run) finds vapour, plateau, breakthrough, plateau in order; the sag is no stall', () => {
+    const r = read({});
+    const events = analyzeReadings(r.timeS, r.headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau']);
+    const [vapour, plateau1, breakthrough, plateau2] = events as [WatchEvent, WatchEvent, WatchEvent, WatchEvent];
+    expect(vapour.timeS).toBeGreaterThanOrEqual(600);
+    expect(vapour.timeS).toBeLessThan(640);
+    expect(Math.abs(plateau1.headC - 56.15)).toBeLessThan(0.5);
+    // Truth: the sag ends at 2160 s at 53.8 degC; the level + 1 degC is crossed on the rise.
+    expect(breakthrough.timeS).toBeGreaterThan(2160);
+    expect(breakthrough.timeS).toBeLessThan(2160 + 120);
+    expect(Math.abs(plateau2.headC - 99.5)).toBeLessThan(0.5);
+  });
+
+  it('a single spike of 30 degC on a plateau raises no event', () => {
+    const r = read({ noiseSdC: 0.05 });
+    const quiet = analyzeReadings(r.timeS, r.headC);
+    const i = r.timeS.findIndex((t) => t > 1200);
+    const spiked = Float64Array.from(r.headC);
+    spiked[i] = spiked[i]! + 30;
+    expect(kinds(analyzeReadings(r.timeS, spiked))).toEqual(kinds(quiet));
+    spiked[i] = r.headC[i]! - 30;
+    expect(kinds(analyzeReadings(r.timeS, spiked))).toEqual(kinds(quiet));
+  });
+
+  it('a single spike at 5 s readings raises no event either', () => {
+    const r = read({ intervalS: 5, noiseSdC: 0.05 });
+    const spiked = Float64Array.from(r.headC);
+    const i = r.timeS.findIndex((t) => t > 1200);
+    spiked[i] = spiked[i]! + 25;
+    expect(kinds(analyzeReadings(r.timeS, spiked))).toEqual(kinds(analyzeReadings(r.timeS, r.headC)));
+  });
+
+  it('spikes, dropouts and draughts over many seeds never make an alarm chatter (3 of a kind in a minute)', () => {
+    for (let seed = 1; seed <= 12; seed++) {
+      const r = read({ seed, noiseSdC: 0.3, quantumC: 0.25, spikesPerHour: 12, dropoutsPerHour: 20, draftSdC: 0.1, intervalS: [0.1, 1, 2][seed % 3]! });
+      const alarms = alarmsOf(analyzeReadings(r.timeS, r.headC));
+      for (let i = 0; i + 2 < alarms.length; i++) {
+        const same = alarms.filter((a) => a.kind === alarms[i]!.kind && a.timeS >= alarms[i]!.timeS && a.timeS < alarms[i]!.timeS + 60);
+        expect(same.length).toBeLessThan(3);
+      }
+      expect(alarms.filter((a) => a.kind === 'breakthrough').length).toBe(1);
+    }
+  });
+
+  it('save() and RunWatcher.restore() mid-run give exactly the events of an unbroken run', () => {
+    const r = read({ intervalS: 0.5, spikesPerHour: 10, quantumC: 0.25, dropoutsPerHour: 10 });
+    const whole = analyzeReadings(r.timeS, r.headC);
+    for (const cutS of [300, 700, 2100, 2200]) {
+      let w = new RunWatcher();
+      const events: WatchEvent[] = [];
+      for (let i = 0; i < r.timeS.length; i++) {
+        if (r.timeS[i - 1]! < cutS && r.timeS[i]! >= cutS) {
+          const json = w.save();
+          expect(() => JSON.parse(json)).not.toThrow();
+          w = RunWatcher.restore(json);
+        }
+        events.push(...w.push(r.timeS[i]!, r.headC[i]!));
+      }
+      expect(events).toEqual(whole);
+    }
+  });
+
+  it('RunWatcher.restore() rejects text that is not a saved state', () => {
+    expect(() => RunWatcher.restore('{"version": 2}')).toThrow(RangeError);
+    expect(() => RunWatcher.restore('not json')).toThrow();
+  });
+
+  it('hand readings every 1-2 minutes rounded to 1 degC still give vapour, plateau and breakthrough', () => {
+    const hand = handReadings(truth.timeS, truth.headC, { seed: 4, roundToC: 1 });
+    const events = analyzeReadings(hand.timeS, hand.headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau']);
+    // Hit window for hand readings: up to three reading intervals (at most 360 s) after truth.
+    expect(events[2]!.timeS).toBeGreaterThan(2160);
+    expect(events[2]!.timeS).toBeLessThan(2160 + 360);
+  });
+
+  it('readings quantised to whole degrees at 2 s still find both plateaus within 1 degC', () => {
+    const r = read({ intervalS: 2, quantumC: 1, noiseSdC: 0.05 });
+    const plateaus = analyzeReadings(r.timeS, r.headC).filter((e) => e.kind === 'plateau');
+    expect(plateaus.length).toBe(2);
+    expect(Math.abs(plateaus[0]!.headC - 56.15)).toBeLessThan(1);
+    expect(Math.abs(plateaus[1]!.headC - 99.5)).toBeLessThan(1);
+  });
+
+  it('an open thermocouple (full-scale readings) is one sensor-fault alarm within 60 s', () => {
+    const r = read({ openFromS: 1500, openReads: 'full-scale' });
+    const faults = analyzeReadings(r.timeS, r.headC).filter((e) => e.kind === 'sensor-fault');
+    expect(faults.length).toBe(1);
+    expect(faults[0]!.reason).toBe('open-thermocouple');
+    expect(faults[0]!.timeS - 1500).toBeLessThan(60);
+    expect(faults[0]!.action).toMatch(/check/i);
+  });
+
+  it('a lost sensor that comes back gives one fault and the run carries on to its breakthrough', () => {
+    const r = read({ lostFromS: 1200, lostToS: 1400 });
+    expect(kinds(analyzeReadings(r.timeS, r.headC))).toEqual(['vapour', 'plateau', 'sensor-fault:no-valid-readings', 'breakthrough', 'plateau']);
+  });
+
+  it('tick() raises a sensor fault when readings stop arriving', () => {
+    const w = new RunWatcher();
+    for (let t = 0; t <= 100; t++) w.push(t, 21);
+    expect(w.tick(105)).toEqual([]);
+    const raised = w.tick(130);
+    expect(kinds(raised)).toEqual(['sensor-fault:no-valid-readings']);
+    expect(w.state).toBe('fault');
+    expect(w.tick(200)).toEqual([]);
+  });
+
+  it('heat lost on a plateau is a falling-away stall within 600 s, once', () => {
+    const lost = syntheticTruth({ ...twoCuts, ending: { kind: 'heat-lost', atS: 1400, tailS: 900, fallTauS: 300 } });
+    const r = read({}, lost);
+    const events = analyzeReadings(r.timeS, r.headC);
+    const stalls = events.filter((e) => e.kind === 'stall');
+    expect(stalls.length).toBe(1);
+    expect(stalls[0]!.reason).toBe('falling-away');
+    expect(stalls[0]!.timeS).toBeGreaterThan(1400);
+    expect(stalls[0]!.timeS).toBeLessThan(2000);
+  });
+
+  it('no vapour after 30 minutes of heating is a no-vapour stall; vapour later still counts', () => {
+    const slow = syntheticTruth({ ...twoCuts, vapourArrivalS: 2700 });
+    const events = analyzeReadings(...Object.values(read({}, slow)) as [Float64Array, Float64Array]);
+    expect(kinds(events).slice(0, 2)).toEqual(['stall:no-vapour', 'vapour']);
+    expect(events[0]!.timeS).toBeGreaterThanOrEqual(1800);
+  });
+
+  it('a climb that never settles is a creeping stall', () => {
+    const creep = syntheticTruth({ roomC: 20, vapourArrivalS: 500, plateaus: [{ levelC: 60, durationS: 1 }], creep: { rateCPerS: 1.5 / 60, durationS: 2700 } });
+    const stalls = analyzeReadings(...Object.values(read({}, creep)) as [Float64Array, Float64Array]).filter((e) => e.kind === 'stall');
+    expect(stalls.map((s) => s.reason)).toEqual(['creeping']);
+  });
+
+  it('readings at or before the last one are ignored', () => {
+    const w = new RunWatcher();
+    w.push(10, 21);
+    expect(w.push(10, 90)).toEqual([]);
+    expect(w.push(5, 90)).toEqual([]);
+    expect(w.push(NaN, 90)).toEqual([]);
+    expect(w.state).toBe('cold');
+  });
+
+  it('RunWatcher rejects a NaN option and an overlapping plan', () => {
+    expect(() => new RunWatcher({ fallAwayC: NaN })).toThrow(RangeError);
+    expect(() => new RunWatcher({}, [{ receiver: 1, fromC: 50, toC: 60 }, { receiver: 2, fromC: 59, toC: 70 }])).toThrow(/overlap/);
+  });
+});

@@ -1,0 +1,68 @@
+import { describe, expect, it } from 'vitest';
+import { percentile, scoreRun, summariseScores, truthWindows, type RunTruth } from '../../src/signal/scoring/index.ts';
+
+// A hand-built truth: room 20, vapour at 100 s to a plateau at 60 (purity 150-400 s),
+// a rise of 0.1 degC/s from 400 s, so level + 1 degC is crossed at 410 s.
+function handTruth(): RunTruth {
+  const n = 700;
+  const timeS = Float64Array.from({ length: n }, (_, i) => i);
+  const headC = timeS.map((t) => (t < 100 ? 20 : t < 400 ? 60 : 60 + 0.1 * (t - 400)));
+  return {
+    timeS, headC, purityIntervals: [{ startS: 150, endS: 400, component: 'a' }],
+    events: [{ kind: 'vapour', timeS: 100 }, { kind: 'stall', timeS: 600, cause: 'pot-dry' }],
+  };
+}
+
+describe('truthWindows', () => {
+  it('truthWindows follows the issue definitions for breakthrough, vapour, stall and plateau', () => {
+    const { alarms, plateaus } = truthWindows(handTruth(), 1, false);
+    expect(plateaus).toEqual([{ startS: 150, endS: 400, levelC: 60 }]);
+    const byKind = Object.fromEntries(alarms.map((a) => [a.kind, a]));
+    expect(byKind.breakthrough).toEqual({ kind: 'breakthrough', timeS: 411, fromS: 351, toS: 651 });
+    expect(byKind.vapour).toEqual({ kind: 'vapour', timeS: 100, fromS: 90, toS: 220 });
+    expect(byKind.stall).toEqual({ kind: 'stall', timeS: 600, fromS: 600, toS: 1200 });
+  });
+  it('truthWindows gives hand readings three intervals after a breakthrough when longer than 240 s', () => {
+    const bt = truthWindows(handTruth(), 100, true).alarms.find((a) => a.kind === 'breakthrough')!;
+    expect(bt.toS - bt.timeS).toBe(300);
+  });
+});
+
+describe('scoreRun', () => {
+  const { alarms, plateaus } = truthWindows(handTruth(), 1, false);
+  it('scoreRun counts hits, latency and plateau level hits', () => {
+    const s = scoreRun(alarms, plateaus, [
+      { timeS: 105, kind: 'vapour', headC: 50 }, { timeS: 200, kind: 'plateau', headC: 61.2 },
+      { timeS: 425, kind: 'breakthrough', headC: 62 }, { timeS: 700, kind: 'stall', headC: 50 },
+    ]);
+    expect(s.hitCount).toEqual({ vapour: 1, breakthrough: 1, stall: 1, 'sensor-fault': 0 });
+    expect(s.falseAlarmCount).toBe(0);
+    expect(s.plateauHitCount).toBe(1);
+    expect(s.breakthroughLatencyS).toEqual([14]);
+  });
+  it('scoreRun counts a second alarm in a hit window as nuisance and false, and a stray as false', () => {
+    const s = scoreRun(alarms, plateaus, [
+      { timeS: 425, kind: 'breakthrough', headC: 62 }, { timeS: 470, kind: 'breakthrough', headC: 66 },
+      { timeS: 300, kind: 'sensor-fault', headC: NaN }, { timeS: 250, kind: 'plateau', headC: 58 },
+    ]);
+    expect(s.hitCount.breakthrough).toBe(1);
+    expect(s.falseAlarmCount).toBe(2);
+    expect(s.nuisanceAlarmCount).toBe(1);
+    expect(s.plateauHitCount).toBe(0);
+  });
+  it('summariseScores pools recall, false alarms per hour and latency percentiles', () => {
+    const a = scoreRun(alarms, plateaus, [{ timeS: 420, kind: 'breakthrough', headC: 61 }]);
+    const b = scoreRun(alarms, plateaus, [{ timeS: 441, kind: 'breakthrough', headC: 63 }, { timeS: 50, kind: 'stall', headC: 20 }]);
+    const sum = summariseScores([a, b], 2);
+    expect(sum.recall.breakthrough).toBe(1);
+    expect(sum.recall.vapour).toBe(0);
+    expect(sum.falseAlarmsPerHour).toBe(0.5);
+    expect(sum.latencyMedianS).toBe(9);
+    expect(sum.latencyP90S).toBe(30);
+    expect(() => summariseScores([a], 0)).toThrow(RangeError);
+  });
+  it('percentile is nearest-rank and NaN for no values', () => {
+    expect(percentile([1, 2, 3, 4, 5, 6, 7, 8, 9, 10], 0.9)).toBe(9);
+    expect(Number.isNaN(percentile([], 0.5))).toBe(true);
+  });
+});
