@@ -139,6 +139,8 @@ export class StiffIntegrator {
     this.t = t0;
     this.tPrevious = t0;
     this.y.set(y0);
+    this.tEnd = t0;
+    this.yEnd.set(y0);
     this.pendingRestart = true;
   }
 
