@@ -11,11 +11,13 @@ export type SaturationPressure = (tK: number) => number;
 export function raoultEquilibrium(pSatPa: readonly SaturationPressure[]): StageEquilibrium {
   const n = pSatPa.length;
   if (n < 1) throw new RangeError('at least one component is needed');
+  const partial = new Float64Array(n);
   return {
     componentCount: n,
     bubbleTInto(x, pPa, yOut, guessK) {
       let tK = guessK > 0 ? guessK : 350;
       const logP = Math.log(pPa);
+      let sum = 0;
       for (let iteration = 0; iteration < 60; iteration++) {
         let total = 0;
         let totalUp = 0;
@@ -23,9 +25,12 @@ export function raoultEquilibrium(pSatPa: readonly SaturationPressure[]): StageE
         for (let i = 0; i < n; i++) {
           const xi = x[i]!;
           const fn = pSatPa[i]!;
-          total += xi * fn(tK);
+          const value = xi * fn(tK);
+          partial[i] = value;
+          total += value;
           totalUp += xi * fn(tK + dT);
         }
+        sum = total;
         if (!(total > 0 && totalUp > 0)) {
           tK *= 1.1; // far below every boiling point the sum underflows: climb back
           continue;
@@ -35,16 +40,12 @@ export function raoultEquilibrium(pSatPa: readonly SaturationPressure[]): StageE
         let step = residual / slope;
         if (step > 50) step = 50; // Antoine forms misbehave far from their range
         else if (step < -50) step = -50;
+        // Converged: keep the temperature the partial pressures belong to, so y needs no
+        // further calls (the step is below 1e-12 of T, quiet enough for finite-difference Jacobians).
+        if (Math.abs(step) <= 1e-12 * tK) break;
         tK -= step;
-        if (Math.abs(step) <= 1e-10 * tK) break;
       }
-      let sum = 0;
-      for (let i = 0; i < n; i++) {
-        const value = x[i]! * pSatPa[i]!(tK);
-        yOut[i] = value;
-        sum += value;
-      }
-      for (let i = 0; i < n; i++) yOut[i] = yOut[i]! / sum;
+      for (let i = 0; i < n; i++) yOut[i] = partial[i]! / sum;
       return tK;
     },
   };

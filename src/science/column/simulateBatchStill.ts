@@ -44,12 +44,23 @@ export function simulateBatchStill(config: BatchStillConfig): BatchStillRun {
     config.column.headHoldupM3 ?? APPARATUS_DEFAULTS.headHoldupM3,
   );
   const totalCharge = charge.reduce((a, b) => a + b, 0);
+  const relTol = config.relTol ?? 1e-6;
+  if (!(relTol > 0 && relTol < 0.01)) throw new RangeError('relTol must be in (0, 0.01)');
   const absTol = new Float64Array(model.size);
   absTol.fill(1e-10 * totalCharge, 0, model.potTemperatureIndex);
-  absTol.fill(1e-4, model.potTemperatureIndex);
+  // Stage and head holdups: composition to about ten times relTol. A vapour front climbing a
+  // cold column moves these in seconds; holding them to relTol of a single component's moles
+  // would cost hundreds of sub-second steps and change nothing a receiver holds.
+  for (let j = 1; j <= n + 1; j++) {
+    const offset = j <= n ? j * c : model.headHoldupOffset;
+    let holdupMol = 0;
+    for (let i = 0; i < c; i++) holdupMol += y0[offset + i]!;
+    absTol.fill(Math.max(10 * relTol * holdupMol, 1e-10 * totalCharge), offset, offset + c);
+  }
+  absTol.fill(1e-2, model.potTemperatureIndex); // K: far below anything a thermometer resolves
   const integrator = new StiffIntegrator(
     model,
-    { relTol: config.relTol ?? 1e-6, absTol, maxStep: MAX_STEP_S, initialStep: 0.1 },
+    { relTol, absTol, maxStep: MAX_STEP_S, initialStep: 0.1 },
     model,
   );
   integrator.reset(0, y0);
@@ -70,13 +81,21 @@ export function simulateBatchStill(config: BatchStillConfig): BatchStillRun {
   const probe = new Float64Array(model.size);
   const distilledNow = new Float64Array(c);
   let nextSample = 0;
+  // States come from the integrator's cubic interpolant; flows and top vapour (which cost a
+  // full set of bubble points) are evaluated at step ends and interpolated linearly between.
+  let derivedStart = new DerivedValues(c);
+  let derivedEnd = new DerivedValues(c);
   const writeSamplesUpTo = (tS: number): void => {
+    derivedEnd.capture(model, integrator.y, integrator.t);
     while (nextSample < sampleCount && nextSample * config.sampleIntervalS <= tS) {
       const ts = nextSample * config.sampleIntervalS;
       integrator.interpolate(ts, probe);
-      writeSample(trace, nextSample, ts, probe, model);
+      writeSample(trace, nextSample, ts, probe, model, derivedStart, derivedEnd);
       nextSample++;
     }
+    const swap = derivedStart;
+    derivedStart = derivedEnd;
+    derivedEnd = swap;
   };
 
   const ledger = new ReceiverLedger(config.cutPlan, c);
@@ -95,7 +114,7 @@ export function simulateBatchStill(config: BatchStillConfig): BatchStillRun {
   // From the state after any mode switch: a switch (the pot going dry) can stop the vapour at
   // once, with no sign change inside a step for the event function to see.
   const noteVapour = (): void => {
-    model.evaluate(integrator.y);
+    derivedStart.capture(model, integrator.y, integrator.t);
     const isSeen = model.vapourMolPerS[n]! >= p.vapourSeenMolPerS;
     if (isSeen && vapourSince === null) vapourSince = integrator.t;
     else if (!isSeen && vapourSince !== null) {
@@ -104,6 +123,7 @@ export function simulateBatchStill(config: BatchStillConfig): BatchStillRun {
     }
   };
   let stopIndex = 0;
+  derivedStart.capture(model, integrator.y, 0);
   writeSamplesUpTo(0);
   while (stopIndex < stops.length) {
     const tStop = stops[stopIndex]!;
@@ -215,20 +235,46 @@ function allocateTrace(count: number, componentCount: number): BatchStillTrace {
   };
 }
 
-function writeSample(trace: BatchStillTrace, k: number, tS: number, y: Float64Array, model: BatchStillModel): void {
-  model.evaluate(y);
+/** Flows and top vapour at one time, for linear interpolation between step ends. */
+class DerivedValues {
+  tS = 0;
+  boilupMolPerS = 0;
+  headVapourMolPerS = 0;
+  readonly topVapour: Float64Array;
+  constructor(componentCount: number) {
+    this.topVapour = new Float64Array(componentCount);
+  }
+  capture(model: BatchStillModel, y: Float64Array, tS: number): void {
+    model.evaluate(y);
+    this.tS = tS;
+    this.boilupMolPerS = model.vapourMolPerS[0]!;
+    this.headVapourMolPerS = model.vapourMolPerS[model.p.stages]!;
+    this.topVapour.set(model.yStage[model.p.stages]!);
+  }
+}
+
+function writeSample(
+  trace: BatchStillTrace,
+  k: number,
+  tS: number,
+  y: Float64Array,
+  model: BatchStillModel,
+  start: DerivedValues,
+  end: DerivedValues,
+): void {
   const c = model.p.componentCount;
-  const n = model.p.stages;
+  const span = end.tS - start.tS;
+  const w = span > 0 ? Math.min(1, Math.max(0, (tS - start.tS) / span)) : 1;
   trace.timeS[k] = tS;
   trace.headK[k] = y[model.headReadingIndex]!;
   trace.potK[k] = y[model.potTemperatureIndex]!;
   trace.distilledM3[k] = model.distilledVolumeM3(y);
-  trace.boilupMolPerS[k] = model.vapourMolPerS[0]!;
-  trace.headVapourMolPerS[k] = model.vapourMolPerS[n]!;
+  trace.boilupMolPerS[k] = start.boilupMolPerS + w * (end.boilupMolPerS - start.boilupMolPerS);
+  trace.headVapourMolPerS[k] = start.headVapourMolPerS + w * (end.headVapourMolPerS - start.headVapourMolPerS);
   let headTotal = 0;
   for (let i = 0; i < c; i++) headTotal += y[model.headHoldupOffset + i]!;
   for (let i = 0; i < c; i++) {
-    trace.topVapourMoleFraction[i]![k] = model.yStage[n]![i]!;
+    trace.topVapourMoleFraction[i]![k] = start.topVapour[i]! + w * (end.topVapour[i]! - start.topVapour[i]!);
     trace.distillateMoleFraction[i]![k] = headTotal > 0 ? y[model.headHoldupOffset + i]! / headTotal : 0;
     trace.distilledMol[i]![k] = y[model.distilledOffset + i]!;
     trace.potMol[i]![k] = y[i]!;

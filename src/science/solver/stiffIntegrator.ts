@@ -67,6 +67,9 @@ export class StiffIntegrator {
   private isJacobianCurrent = false;
   private isJacobianStale = true;
   private factoredStep = Number.NaN;
+  private eta = 1;
+  /** True when the last step's interpolant may be extrapolated as a predictor. */
+  private hasHistory = false;
 
   private readonly f: Float64Array;
   private readonly yPrevious: Float64Array;
@@ -194,9 +197,12 @@ export class StiffIntegrator {
       this.tEnd = this.t;
       this.yEnd.set(this.y);
       this.fEnd.set(this.f);
+      this.hasHistory = true;
       this.isJacobianCurrent = false;
-      // A clipped final step says nothing about the step the solution allows.
-      if (!isFinal || factor < 1) this.h = hTry * factor;
+      // A clipped final step says nothing about the step the solution allows. Small increases
+      // are skipped: the factorised iteration matrix is then reused (as Hairer's RADAU5 does).
+      if (factor < 1 || (!isFinal && factor > 1.25)) this.h = hTry * factor;
+      else if (!isFinal) this.h = hTry;
       if (this.eventSystem !== null && this.eventFlags.length > 0 && this.locateEvent()) {
         this.pendingRestart = true;
         return EVENT_FOUND;
@@ -236,6 +242,8 @@ export class StiffIntegrator {
 
   private doRestart(tStop: number): void {
     this.pendingRestart = false;
+    this.hasHistory = false;
+    this.eta = 1;
     this.callRhs(this.t, this.y, this.f);
     this.isJacobianStale = true;
     this.isJacobianCurrent = false;
@@ -304,6 +312,9 @@ export class StiffIntegrator {
     const n = this.size;
     const dh = D * h;
     let previousNorm = 0;
+    // The contraction estimate carries over from the last solve, so a good predictor can be
+    // accepted after one iteration (Hairer & Wanner, Solving ODEs II, section IV.8).
+    this.eta = Math.pow(Math.max(this.eta, 1e-16), 0.8);
     for (let iteration = 0; iteration < NEWTON_MAX_ITERATIONS; iteration++) {
       this.callRhs(tz, z, fz);
       for (let i = 0; i < n; i++) this.delta[i] = this.stageConstant[i]! + dh * fz[i]! - z[i]!;
@@ -311,12 +322,12 @@ export class StiffIntegrator {
       for (let i = 0; i < n; i++) z[i] = z[i]! + this.delta[i]!;
       const norm = this.weightedNorm(this.delta, z);
       if (!Number.isFinite(norm)) return false;
-      if (norm <= 1e-3 * NEWTON_TOLERANCE) break;
       if (iteration > 0) {
         const rate = norm / previousNorm;
         if (rate > 0.9) return false;
-        if ((rate / (1 - rate)) * norm <= NEWTON_TOLERANCE) break;
+        this.eta = rate / (1 - rate);
       }
+      if (this.eta * norm <= NEWTON_TOLERANCE || norm <= 1e-3 * NEWTON_TOLERANCE) break;
       previousNorm = norm;
       if (iteration === NEWTON_MAX_ITERATIONS - 1) return false;
     }
@@ -333,14 +344,21 @@ export class StiffIntegrator {
     const dh = D * h;
     const y = this.y;
     const f = this.f;
-    for (let i = 0; i < n; i++) {
-      this.stageConstant[i] = y[i]! + dh * f[i]!;
-      this.zGamma[i] = y[i]! + GAMMA * h * f[i]!;
-    }
+    for (let i = 0; i < n; i++) this.stageConstant[i] = y[i]! + dh * f[i]!;
+    if (this.hasHistory) this.interpolate(this.t + GAMMA * h, this.zGamma);
+    else for (let i = 0; i < n; i++) this.zGamma[i] = y[i]! + GAMMA * h * f[i]!;
     if (!this.newton(this.t + GAMMA * h, h, this.zGamma, this.fGamma)) return -1;
+    // Predictor: the cubic Hermite through (t, y, f) and (t + gamma h, zGamma, fGamma),
+    // extrapolated to t + h (s = 1 / gamma in the stage's own unit).
+    const sh = 1 / GAMMA;
+    const span = GAMMA * h;
+    const p00 = 2 * sh ** 3 - 3 * sh ** 2 + 1;
+    const p10 = (sh ** 3 - 2 * sh ** 2 + sh) * span;
+    const p01 = -2 * sh ** 3 + 3 * sh ** 2;
+    const p11 = (sh ** 3 - sh ** 2) * span;
     for (let i = 0; i < n; i++) {
       this.stageConstant[i] = BDF_Y_GAMMA * this.zGamma[i]! - BDF_Y_N * y[i]!;
-      this.zNew[i] = y[i]! + (this.zGamma[i]! - y[i]!) / GAMMA;
+      this.zNew[i] = p00 * y[i]! + p10 * f[i]! + p01 * this.zGamma[i]! + p11 * this.fGamma[i]!;
     }
     if (!this.newton(this.t + h, h, this.zNew, this.fNew)) return -1;
     const e = this.delta;
