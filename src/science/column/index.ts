@@ -17,3 +17,7 @@ export type {
 export { simulateBatchStill } from './simulateBatchStill.ts';
 export { findPlateaus } from './findPlateaus.ts';
 export { APPARATUS_DEFAULTS } from './apparatusDefaults.ts';
+export { fenskeStages, estimatePlatesFromFractions } from './fenskeStages.ts';
+export type { PlateEstimate } from './fenskeStages.ts';
+export { fitPlatesToHeadCurve } from './fitPlatesToHeadCurve.ts';
+export type { HeadCurve, PlateFit } from './fitPlatesToHeadCurve.ts';
