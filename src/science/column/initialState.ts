@@ -1,5 +1,4 @@
 import type { BatchStillModel } from './batchStillModel.ts';
-import { APPARATUS_DEFAULTS } from './apparatusDefaults.ts';
 
 /**
  * The state at heat on: everything at room temperature, nothing distilled, and the column's
@@ -77,8 +76,3 @@ function fillPot(model: BatchStillModel, y: Float64Array, chargeMol: Float64Arra
   }
   return true;
 }
-
-export const DEFAULT_HOLDUPS = {
-  stageHoldupM3: APPARATUS_DEFAULTS.stageHoldupM3,
-  headHoldupM3: APPARATUS_DEFAULTS.headHoldupM3,
-} as const;

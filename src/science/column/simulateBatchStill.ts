@@ -268,7 +268,10 @@ function writeSample(
   trace.timeS[k] = tS;
   trace.headK[k] = y[model.headReadingIndex]!;
   trace.potK[k] = y[model.potTemperatureIndex]!;
-  trace.distilledM3[k] = model.distilledVolumeM3(y);
+  // The cubic interpolant can dip by rounding-sized amounts where distillate starts; the
+  // volume axis is kept non-decreasing so curves against it stay functions.
+  const volumeM3 = model.distilledVolumeM3(y);
+  trace.distilledM3[k] = k > 0 && volumeM3 < trace.distilledM3[k - 1]! ? trace.distilledM3[k - 1]! : Math.max(0, volumeM3);
   trace.boilupMolPerS[k] = start.boilupMolPerS + w * (end.boilupMolPerS - start.boilupMolPerS);
   trace.headVapourMolPerS[k] = start.headVapourMolPerS + w * (end.headVapourMolPerS - start.headVapourMolPerS);
   let headTotal = 0;
