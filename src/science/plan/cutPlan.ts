@@ -126,18 +126,11 @@ export function planCuts(input: CutPlanInput): CutPlan {
     }
     withGaps.push({ ...fraction });
   }
-  withGaps.forEach((fraction, index) => {
-    fraction.receiver = index + 1;
-    if (fraction.compound !== null) return;
-    const before = withGaps[index - 1];
-    const after = withGaps[index + 1];
-    if (before) fraction.fromTK = Math.min(fraction.fromTK, before.toTK);
-    if (after) fraction.toTK = Math.max(fraction.toTK, after.fromTK);
-  });
+  const tiled = tileWindows(withGaps);
 
   const boiling = order.map((o) => ({ compound: o.c, tK: o.sat.tK }));
   return {
-    fractions: withGaps,
+    fractions: tiled,
     boilingPoints: order.map((o) => ({ compound: o.c.name, tK: o.sat.tK, isExtrapolated: o.sat.isExtrapolated })),
     relativeVolatilities,
     minimumStages,
@@ -145,4 +138,47 @@ export function planCuts(input: CutPlanInput): CutPlan {
     advice: adviseDistillation(boiling, azeotropes, plates, minimumStages, input.heatSourceMaxK),
     isEstimated: mixture.isEstimated,
   };
+}
+
+/**
+ * Makes the windows tile the temperature scale: each receiver's window ends where the next one
+ * begins, with no overlap, because the live watcher gives every head temperature to exactly one
+ * receiver. An intermediate cut spans the gap between its neighbours; two adjacent main cuts meet
+ * half way; an intermediate squeezed to nothing by the allowance of its neighbours is dropped.
+ */
+function tileWindows(fractions: readonly PlannedFraction[]): PlannedFraction[] {
+  let list = fractions.map((f) => ({ ...f }));
+  for (;;) {
+    const bounds: number[] = [];
+    for (let i = 0; i + 1 < list.length; i++) {
+      const a = list[i]!;
+      const b = list[i + 1]!;
+      bounds.push(a.compound === null ? b.fromTK : b.compound === null ? a.toTK : 0.5 * (a.toTK + b.fromTK));
+    }
+    // Boundaries must rise; where one falls below the one before, the fraction between is squeezed.
+    let squeezed = -1;
+    for (let k = 0; k < list.length && squeezed < 0; k++) {
+      const lower = k > 0 ? bounds[k - 1]! : list[k]!.fromTK;
+      const upper = k + 1 < list.length ? bounds[k]! : list[k]!.toTK;
+      if (!(upper > lower)) squeezed = k;
+    }
+    if (squeezed < 0) {
+      return list.map((f, k) => ({
+        ...f,
+        receiver: k + 1,
+        fromTK: k > 0 ? bounds[k - 1]! : f.fromTK,
+        toTK: k + 1 < list.length ? bounds[k]! : f.toTK,
+      }));
+    }
+    const victim = list[squeezed]!.compound === null ? squeezed : [squeezed - 1, squeezed + 1].find((k) => list[k]?.compound === null);
+    if (victim === undefined) {
+      // Two main cuts that overlap by more than their own width: keep them, a hair apart.
+      const k = squeezed;
+      const lower = k > 0 ? bounds[k - 1]! : list[k]!.fromTK;
+      list[k] = { ...list[k]!, fromTK: lower, toTK: lower + 0.1 };
+      if (list[k + 1]) list[k + 1] = { ...list[k + 1]!, fromTK: Math.max(list[k + 1]!.fromTK, lower + 0.1) };
+      continue;
+    }
+    list = list.filter((_, k) => k !== victim);
+  }
 }
