@@ -13,6 +13,8 @@ export interface SessionDeps {
   alerter: Alerter | null;
   wakeLock: ScreenWakeLock | null;
   createWatcher(plan: unknown, saved?: unknown): RunWatcher;
+  /** Told how long each journal flush took (for User Timing in the browser, read by bench/). */
+  onFlushTimed?(startMs: number, durationMs: number, readings: number): void;
 }
 
 export interface SessionTimings {
@@ -209,9 +211,12 @@ export class RunSession {
   /** Writes what is unsaved now (the app calls this when the page is being hidden). */
   async flushNow(): Promise<void> {
     this.#saveLiveState();
+    const readings = this.#journal.unsavedCount;
+    const startMs = this.#deps.clock.now();
     try {
       await this.#journal.flush(this.#deps.wallMs());
       this.storageError = null;
+      this.#deps.onFlushTimed?.(startMs, this.#deps.clock.now() - startMs, readings);
     } catch (error) {
       this.storageError = `Readings could not be saved (${error instanceof Error ? error.message : String(error)}); retrying. Keep the app open.`;
     }

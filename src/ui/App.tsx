@@ -42,8 +42,10 @@ export function App({ services, updates }: AppProps) {
   const hiddenAt = useRef<number | null>(null);
   useSessionVersion(session);
 
+  // `#demo-interval=0.1` in the address gives the demo 10 readings a second (bench/watch-soak).
+  const demoIntervalS = Number(new URLSearchParams(location.hash.slice(1)).get('demo-interval')) || 1;
   const makeDemoSource = (speed: number, saved?: DemoStillSnapshot): LiveSource =>
-    new SimulatedSource({ speed, still: createDemoStill({}, saved) });
+    new SimulatedSource({ speed, sampleIntervalS: demoIntervalS, still: createDemoStill({}, saved) });
 
   // Settings, then any run that was going when the app last stopped.
   useEffect(() => {

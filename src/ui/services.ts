@@ -25,7 +25,17 @@ export function createBrowserServices(): AppServices {
     alerter,
     wakeLock,
     notifier,
-    sessionDeps: { store, clock: browserClock, wallMs: () => Date.now(), alerter, wakeLock, createWatcher: createSignalWatcher },
+    sessionDeps: {
+      store,
+      clock: browserClock,
+      wallMs: () => Date.now(),
+      alerter,
+      wakeLock,
+      createWatcher: createSignalWatcher,
+      onFlushTimed: (start, duration, readings) => {
+        performance.measure('cutbell journal flush', { start, duration, detail: { readings } });
+      },
+    },
     checkStorage: (askPersist) => checkStorage(globalThis.navigator?.storage, askPersist),
   };
 }
