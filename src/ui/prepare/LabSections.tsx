@@ -72,7 +72,7 @@ export function ColumnSection({ form, reading, separator, onChange, learned }: S
   return (
     <section class="prepare-section" aria-labelledby="column-title">
       <h2 id="column-title">Column</h2>
-      <Choice label="Column" value={column.kind} options={columnKinds} onChange={(kind) => set({ kind, learnedId: kind === 'learned' && !column.learnedId ? (learned[0]?.id ?? '') : column.learnedId })} />
+      <Choice label="Kind of column" value={column.kind} options={columnKinds} onChange={(kind) => set({ kind, learnedId: kind === 'learned' && !column.learnedId ? (learned[0]?.id ?? '') : column.learnedId })} />
       {column.kind === 'packed' && (
         <Choice label="Packing" value={column.packing} options={packingChoices.map((k) => [k, packingLabel(k)] as const)} onChange={(packing) => set({ packing })} />
       )}
