@@ -42,6 +42,9 @@ describe('Prepare screen on a phone', () => {
     expect(await page.locator('.plan-chart canvas').count()).toBeGreaterThanOrEqual(3);
     expect(await page.getByTestId('prediction-1').textContent()).toMatch(/about \d+\.\d mL, \d+ mol % n-hexane/);
 
+    // Nothing on the Prepare screen makes the phone scroll sideways.
+    await expect.poll(() => page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(page.viewportSize()!.width);
+
     // Edit receiver 1's upper bound; the checked window goes with the run.
     const upper = page.getByLabel('Receiver 1 to');
     await upper.fill('70.5');

@@ -16,7 +16,7 @@ interface SectionProps {
 const pressureMethods: ReadonlyArray<readonly [PressureMethod, string]> = [
   ['barometer', 'Barometer in the lab'],
   ['altitude', 'Lab altitude only'],
-  ['sea-level', 'Weather report (sea level) and altitude'],
+  ['sea-level', 'Weather report and altitude'],
 ];
 
 /** The lab's pressure, three ways, with the check for a sea-level value typed as a reading. */
