@@ -5,5 +5,5 @@ export { RunJournal, loadRun, activeRunKey, chunkKey, manifestKey } from './runJ
 export type { JournalManifest, RestoredRun } from './runJournal.ts';
 export { checkStorage } from './storageHealth.ts';
 export type { StorageHealth, StorageLike } from './storageHealth.ts';
-export { defaultSettings, loadSettings, saveSettings } from './settings.ts';
-export type { Settings } from './settings.ts';
+export { defaultSettings, loadSettings, saveSettings, pressureUnitSettings } from './settings.ts';
+export type { Settings, TemperatureUnitSetting, PressureUnitSetting, DecimalSeparatorSetting } from './settings.ts';

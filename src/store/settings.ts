@@ -1,5 +1,13 @@
 import type { KeyValueStore } from './keyValueStore.ts';
 
+/** Temperature scale for what the chemist types and reads (the app keeps K and degC inside). */
+export type TemperatureUnitSetting = 'degC' | 'degF';
+/** Pressure units offered for the lab's pressure (spelled as formatPressure spells them). */
+export const pressureUnitSettings = ['kPa', 'hPa', 'mbar', 'mmHg', 'Torr', 'inHg', 'atm', 'psi'] as const;
+export type PressureUnitSetting = (typeof pressureUnitSettings)[number];
+/** Decimal mark in number inputs: the phone's locale ('auto'), or a fixed point or comma. */
+export type DecimalSeparatorSetting = 'auto' | '.' | ',';
+
 /** The chemist's preferences, kept on the phone. */
 export interface Settings {
   speech: boolean;
@@ -7,11 +15,26 @@ export interface Settings {
   vibration: boolean;
   /** Simulated seconds per real second for the demo source. */
   demoSpeed: number;
+  temperatureUnit: TemperatureUnitSetting;
+  pressureUnit: PressureUnitSetting;
+  decimalSeparator: DecimalSeparatorSetting;
 }
 
-export const defaultSettings: Settings = { speech: true, sound: true, vibration: true, demoSpeed: 30 };
+export const defaultSettings: Settings = {
+  speech: true,
+  sound: true,
+  vibration: true,
+  demoSpeed: 30,
+  temperatureUnit: 'degC',
+  pressureUnit: 'kPa',
+  decimalSeparator: 'auto',
+};
 
 const settingsKey = ['settings'];
+
+function oneOf<T extends string>(value: unknown, allowed: readonly T[], fallback: T): T {
+  return typeof value === 'string' && (allowed as readonly string[]).includes(value) ? (value as T) : fallback;
+}
 
 /** Loads settings, filling anything missing or malformed with the defaults. */
 export async function loadSettings(store: KeyValueStore): Promise<Settings> {
@@ -29,6 +52,9 @@ export async function loadSettings(store: KeyValueStore): Promise<Settings> {
     sound: pick('sound'),
     vibration: pick('vibration'),
     demoSpeed: demoSpeed > 0 ? demoSpeed : defaultSettings.demoSpeed,
+    temperatureUnit: oneOf(saved?.temperatureUnit, ['degC', 'degF'], defaultSettings.temperatureUnit),
+    pressureUnit: oneOf(saved?.pressureUnit, pressureUnitSettings, defaultSettings.pressureUnit),
+    decimalSeparator: oneOf(saved?.decimalSeparator, ['auto', '.', ','], defaultSettings.decimalSeparator),
   };
 }
 

@@ -6,6 +6,9 @@ import { RunSession, type LiveSource } from '../session/index.ts';
 import { defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
 import { AlarmBanner } from './alarm/AlarmBanner.tsx';
 import { PreHeatChecklist } from './prepare/PreHeatChecklist.tsx';
+// Prepare (issue 8): loaded on first visit; a prepared run starts through the checklist.
+import { LazyPrepareScreen } from './prepare/LazyPrepareScreen.tsx';
+import type { PreparedRun } from './prepare/preparedRun.ts';
 import type { AppServices } from './services.ts';
 import { SettingsScreen } from './settings/SettingsScreen.tsx';
 import type { UpdateService } from './update/pwaUpdate.ts';
@@ -14,7 +17,7 @@ import { useSessionVersion } from './useSession.ts';
 import { formatElapsed } from './watch/format.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
 
-type Screen = 'watch' | 'settings';
+type Screen = 'watch' | 'prepare' | 'settings';
 type Stage = 'loading' | 'idle' | 'checklist' | 'running' | 'ended';
 
 interface AppProps {
@@ -40,12 +43,13 @@ export function App({ services, updates }: AppProps) {
   const [storageWarning, setStorageWarning] = useState<string | null>(null);
   const [startError, setStartError] = useState<string | null>(null);
   const hiddenAt = useRef<number | null>(null);
+  const [prepared, setPrepared] = useState<PreparedRun | null>(null);
   useSessionVersion(session);
 
   // `#demo-interval=0.1` in the address gives the demo 10 readings a second (bench/watch-soak).
   const demoIntervalS = Number(new URLSearchParams(location.hash.slice(1)).get('demo-interval')) || 1;
-  const makeDemoSource = (speed: number, saved?: DemoStillSnapshot): LiveSource =>
-    new SimulatedSource({ speed, sampleIntervalS: demoIntervalS, still: createDemoStill({}, saved) });
+  const makeDemoSource = (speed: number, saved?: DemoStillSnapshot, still: { pressurePa?: number; plates?: number } = {}): LiveSource =>
+    new SimulatedSource({ speed, sampleIntervalS: demoIntervalS, still: createDemoStill(still, saved) });
 
   // Settings, then any run that was going when the app last stopped.
   useEffect(() => {
@@ -120,7 +124,21 @@ export function App({ services, updates }: AppProps) {
     void services.notifier.ask().catch(() => undefined);
     void services.checkStorage(true).then((health) => setStorageWarning(health.warning));
     try {
-      const started = await RunSession.start(
+      // A prepared run: its plan, charge, pressure and column, driven by the demo still for now.
+      const started = prepared ? await RunSession.start(
+        services.sessionDeps,
+        {
+          id: `run-${Date.now().toString(36)}`,
+          title: prepared.title,
+          device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser',
+          source: { kind: 'simulated', label: 'Simulated run (demo still, not your apparatus)' },
+          charge: prepared.charge,
+          pressurePa: prepared.pressurePa,
+          column: prepared.column,
+          plan: prepared.plan,
+        },
+        makeDemoSource(settings.demoSpeed, undefined, { pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates }),
+      ) : await RunSession.start(
         services.sessionDeps,
         {
           id: `run-${Date.now().toString(36)}`,
@@ -135,6 +153,7 @@ export function App({ services, updates }: AppProps) {
         makeDemoSource(settings.demoSpeed),
       );
       setSession(started);
+      setPrepared(null);
       setEnded(null);
       setStage('running');
     } catch (error) {
@@ -162,6 +181,18 @@ export function App({ services, updates }: AppProps) {
       {startError && <p class="warning" role="alert">{startError}</p>}
 
       <main>
+        {screen === 'prepare' && (
+          <LazyPrepareScreen
+            store={services.store}
+            settings={settings}
+            isRunGoing={isRunGoing}
+            onContinue={(run) => {
+              setPrepared(run);
+              setScreen('watch');
+              setStage('checklist');
+            }}
+          />
+        )}
         {screen === 'settings' && <SettingsScreen settings={settings} services={services} onChange={changeSettings} />}
         {screen === 'watch' && stage === 'loading' && <p class="notice">Opening…</p>}
         {screen === 'watch' && stage === 'idle' && (
@@ -178,7 +209,17 @@ export function App({ services, updates }: AppProps) {
           </section>
         )}
         {screen === 'watch' && stage === 'checklist' && (
-          <PreHeatChecklist startLabel="Heat on: start the run" onStart={() => void startDemoRun()} onBack={() => setStage('idle')} />
+          <PreHeatChecklist
+            key={prepared ? prepared.title : 'demo'}
+            extraChecks={prepared?.extraChecks}
+            startLabel="Heat on: start the run"
+            onStart={() => void startDemoRun()}
+            onBack={() => {
+              if (prepared) setScreen('prepare');
+              setPrepared(null);
+              setStage('idle');
+            }}
+          />
         )}
         {screen === 'watch' && (stage === 'running' || stage === 'ended') && session && (
           <WatchScreen
@@ -222,6 +263,7 @@ export function App({ services, updates }: AppProps) {
       )}
 
       <nav class="tab-bar" aria-label="Screens">
+        <button type="button" aria-current={screen === 'prepare' ? 'page' : undefined} onClick={() => setScreen('prepare')}>Prepare</button>
         <button type="button" aria-current={screen === 'watch' ? 'page' : undefined} onClick={() => setScreen('watch')}>Watch</button>
         <button type="button" aria-current={screen === 'settings' ? 'page' : undefined} onClick={() => setScreen('settings')}>Settings</button>
       </nav>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MemoryStore, defaultSettings, loadSettings, saveSettings } from '../../src/store/index.ts';
+import { MemoryStore, defaultSettings, loadSettings, saveSettings, type Settings } from '../../src/store/index.ts';
 
 describe('settings', () => {
   it('loadSettings gives the defaults on a new phone', async () => {
@@ -8,13 +8,21 @@ describe('settings', () => {
 
   it('saveSettings then loadSettings round-trips', async () => {
     const store = new MemoryStore();
-    await saveSettings(store, { speech: false, sound: true, vibration: false, demoSpeed: 120 });
-    expect(await loadSettings(store)).toEqual({ speech: false, sound: true, vibration: false, demoSpeed: 120 });
+    const chosen: Settings = { speech: false, sound: true, vibration: false, demoSpeed: 120, temperatureUnit: 'degF', pressureUnit: 'mmHg', decimalSeparator: ',' };
+    await saveSettings(store, chosen);
+    expect(await loadSettings(store)).toEqual(chosen);
   });
 
   it('loadSettings replaces malformed values with defaults and keeps the good ones', async () => {
     const store = new MemoryStore();
-    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3 }]]);
+    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3, temperatureUnit: 'K', pressureUnit: 'mmhg', decimalSeparator: ';' }]]);
     expect(await loadSettings(store)).toEqual({ ...defaultSettings, sound: false });
+  });
+
+  it('loadSettings fills the unit settings in for settings saved before they existed', async () => {
+    const store = new MemoryStore();
+    await store.setMany([[['settings'], { speech: true, sound: true, vibration: true, demoSpeed: 10 }]]);
+    const loaded = await loadSettings(store);
+    expect([loaded.temperatureUnit, loaded.pressureUnit, loaded.decimalSeparator, loaded.demoSpeed]).toEqual(['degC', 'kPa', 'auto', 10]);
   });
 });

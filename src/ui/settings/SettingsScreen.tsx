@@ -1,4 +1,6 @@
-import type { Settings } from '../../store/index.ts';
+import { pressureUnitSettings, type DecimalSeparatorSetting, type PressureUnitSetting, type Settings, type TemperatureUnitSetting } from '../../store/index.ts';
+import './settings.css';
+import { localeDecimalSeparator } from '../units/index.ts';
 import type { AppServices } from '../services.ts';
 
 interface SettingsScreenProps {
@@ -59,6 +61,30 @@ export function SettingsScreen({ settings, services, onChange }: SettingsScreenP
         </button>
       </div>
       <p class="hint">Notifications reach you when Cutbell is hidden. Keep the app in front with the screen on during a run: a phone may pause hidden pages.</p>
+
+      <h2>Units</h2>
+      <p class="hint">Used by every box you type in and every figure Cutbell shows on Prepare.</p>
+      <label class="setting-choice">
+        <span>Temperature</span>
+        <select class="select-input" value={settings.temperatureUnit} onChange={(e) => onChange({ ...settings, temperatureUnit: (e.currentTarget as HTMLSelectElement).value as TemperatureUnitSetting })}>
+          <option value="degC">degrees Celsius (°C)</option>
+          <option value="degF">degrees Fahrenheit (°F)</option>
+        </select>
+      </label>
+      <label class="setting-choice">
+        <span>Pressure</span>
+        <select class="select-input" value={settings.pressureUnit} onChange={(e) => onChange({ ...settings, pressureUnit: (e.currentTarget as HTMLSelectElement).value as PressureUnitSetting })}>
+          {pressureUnitSettings.map((u) => <option key={u} value={u}>{u}</option>)}
+        </select>
+      </label>
+      <label class="setting-choice">
+        <span>Decimal mark</span>
+        <select class="select-input" value={settings.decimalSeparator} onChange={(e) => onChange({ ...settings, decimalSeparator: (e.currentTarget as HTMLSelectElement).value as DecimalSeparatorSetting })}>
+          <option value="auto">as the phone’s language ({localeDecimalSeparator() === ',' ? 'comma: 1,5' : 'point: 1.5'})</option>
+          <option value=".">point: 1.5</option>
+          <option value=",">comma: 1,5</option>
+        </select>
+      </label>
 
       <h2>Demo</h2>
       <fieldset class="speed">
