@@ -7,9 +7,13 @@ export interface Settings {
   vibration: boolean;
   /** Simulated seconds per real second for the demo source. */
   demoSpeed: number;
+  /** The lab server's address; empty means the server this app was opened from. */
+  syncServer: string;
+  /** This phone's token for the lab server; empty means sync is off. */
+  syncToken: string;
 }
 
-export const defaultSettings: Settings = { speech: true, sound: true, vibration: true, demoSpeed: 30 };
+export const defaultSettings: Settings = { speech: true, sound: true, vibration: true, demoSpeed: 30, syncServer: '', syncToken: '' };
 
 const settingsKey = ['settings'];
 
@@ -29,6 +33,8 @@ export async function loadSettings(store: KeyValueStore): Promise<Settings> {
     sound: pick('sound'),
     vibration: pick('vibration'),
     demoSpeed: demoSpeed > 0 ? demoSpeed : defaultSettings.demoSpeed,
+    syncServer: pick('syncServer'),
+    syncToken: pick('syncToken'),
   };
 }
 

@@ -8,13 +8,14 @@ describe('settings', () => {
 
   it('saveSettings then loadSettings round-trips', async () => {
     const store = new MemoryStore();
-    await saveSettings(store, { speech: false, sound: true, vibration: false, demoSpeed: 120 });
-    expect(await loadSettings(store)).toEqual({ speech: false, sound: true, vibration: false, demoSpeed: 120 });
+    const saved = { speech: false, sound: true, vibration: false, demoSpeed: 120, syncServer: 'https://lab.example:8443/', syncToken: 'cb1.abc' };
+    await saveSettings(store, saved);
+    expect(await loadSettings(store)).toEqual(saved);
   });
 
   it('loadSettings replaces malformed values with defaults and keeps the good ones', async () => {
     const store = new MemoryStore();
-    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3 }]]);
+    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3, syncToken: 42 }]]);
     expect(await loadSettings(store)).toEqual({ ...defaultSettings, sound: false });
   });
 });

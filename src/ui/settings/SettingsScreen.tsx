@@ -1,5 +1,6 @@
 import type { Settings } from '../../store/index.ts';
 import type { AppServices } from '../services.ts';
+import { SyncSettings } from './SyncSettings.tsx';
 
 interface SettingsScreenProps {
   settings: Settings;
@@ -70,6 +71,8 @@ export function SettingsScreen({ settings, services, onChange }: SettingsScreenP
           </label>
         ))}
       </fieldset>
+
+      <SyncSettings settings={settings} services={services} onChange={onChange} />
     </section>
   );
 }
