@@ -19,7 +19,8 @@ export function demoRunRecord(id: string, readingCount = 100, options: { started
   const timeS = new Float64Array(readingCount);
   const headC = new Float64Array(readingCount);
   for (let i = 0; i < readingCount; i++) {
-    timeS[i] = i * stepS;
+    // Rounded so 0.1 s steps print as 0.3, not 0.30000000000000004.
+    timeS[i] = Math.round(i * stepS * 1000) / 1000;
     headC[i] = i % 97 === 13 ? NaN : Math.round((22 + 56 * (1 - Math.exp(-i / 600))) * 100) / 100;
   }
   const endedAt = new Date(Date.parse(header.started_at) + readingCount * stepS * 1000).toISOString();
