@@ -1,5 +1,6 @@
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { createLabApi, type LabApiOptions } from './labApi.ts';
 import { createStaticHandler } from './staticFiles.ts';
 
 export interface AppServerOptions {
@@ -7,6 +8,8 @@ export interface AppServerOptions {
   distDir: string;
   port: number;
   host: string;
+  /** The lab's sync API under /api/; without it the server serves the app only. */
+  api?: LabApiOptions;
 }
 
 export interface RunningServer {
@@ -15,13 +18,16 @@ export interface RunningServer {
   close(): Promise<void>;
 }
 
-/** The app server: static app today; the lab's sync API will mount under /api/. */
-export async function startAppServer({ distDir, port, host }: AppServerOptions): Promise<RunningServer> {
+/** The app server: the built app, and the lab's sync API under /api/ on the same port. */
+export async function startAppServer({ distDir, port, host, api }: AppServerOptions): Promise<RunningServer> {
   const serveStatic = createStaticHandler(distDir);
+  const serveApi = api ? createLabApi(api) : null;
   const server = createServer((request, response) => {
-    serveStatic(request, response).catch((error: unknown) => {
+    const isApi = (request.url ?? '/').startsWith('/api/');
+    const handle = isApi && serveApi ? serveApi : serveStatic;
+    handle(request, response).catch((error: unknown) => {
       console.error('request failed:', error);
-      if (!response.headersSent) response.writeHead(500, { 'content-type': 'text/plain; charset=utf-8' });
+      if (!response.headersSent) response.writeHead(500, { 'content-type': 'text/plain; charset=utf-8', connection: 'close' });
       response.end('server error\n');
     });
   });
@@ -34,6 +40,11 @@ export async function startAppServer({ distDir, port, host }: AppServerOptions):
   return {
     server,
     url: `http://${shownHost}:${address.port}/`,
-    close: () => new Promise((resolve, reject) => server.close((error) => (error ? reject(error) : resolve()))),
+    close: () =>
+      new Promise((resolve, reject) => {
+        server.close((error) => (error ? reject(error) : resolve()));
+        // Idle keep-alive connections would hold close() open for seconds.
+        server.closeIdleConnections();
+      }),
   };
 }

@@ -18,6 +18,10 @@ export interface Settings {
   temperatureUnit: TemperatureUnitSetting;
   pressureUnit: PressureUnitSetting;
   decimalSeparator: DecimalSeparatorSetting;
+  /** The lab server's address; empty means the server this app was opened from. */
+  syncServer: string;
+  /** This phone's token for the lab server; empty means sync is off. */
+  syncToken: string;
 }
 
 export const defaultSettings: Settings = {
@@ -28,6 +32,8 @@ export const defaultSettings: Settings = {
   temperatureUnit: 'degC',
   pressureUnit: 'kPa',
   decimalSeparator: 'auto',
+  syncServer: '',
+  syncToken: '',
 };
 
 const settingsKey = ['settings'];
@@ -55,6 +61,8 @@ export async function loadSettings(store: KeyValueStore): Promise<Settings> {
     temperatureUnit: oneOf(saved?.temperatureUnit, ['degC', 'degF'], defaultSettings.temperatureUnit),
     pressureUnit: oneOf(saved?.pressureUnit, pressureUnitSettings, defaultSettings.pressureUnit),
     decimalSeparator: oneOf(saved?.decimalSeparator, ['auto', '.', ','], defaultSettings.decimalSeparator),
+    syncServer: pick('syncServer'),
+    syncToken: pick('syncToken'),
   };
 }
 

@@ -4,20 +4,23 @@ import { createDemoStill, demoCutPlan, demoMixture, type DemoStillSnapshot } fro
 import { SimulatedSource } from '../sensor/simulated/simulatedSource.ts';
 import { RunSession, type LiveSource } from '../session/index.ts';
 import { defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
+import { queueEndedRuns, readSyncLink, startSyncTriggers } from '../sync/index.ts';
 import { AlarmBanner } from './alarm/AlarmBanner.tsx';
+import { LabTab } from './lab/LabTab.tsx';
 import { PreHeatChecklist } from './prepare/PreHeatChecklist.tsx';
 // Prepare (issue 8): loaded on first visit; a prepared run starts through the checklist.
 import { LazyPrepareScreen } from './prepare/LazyPrepareScreen.tsx';
 import type { PreparedRun } from './prepare/preparedRun.ts';
 import type { AppServices } from './services.ts';
 import { SettingsScreen } from './settings/SettingsScreen.tsx';
+import { RunSyncLine } from './sync/RunSyncLine.tsx';
 import type { UpdateService } from './update/pwaUpdate.ts';
 import { UpdateNotice } from './update/UpdateNotice.tsx';
 import { useSessionVersion } from './useSession.ts';
 import { formatElapsed } from './watch/format.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
 
-type Screen = 'watch' | 'prepare' | 'settings';
+type Screen = 'watch' | 'prepare' | 'settings' | 'lab';
 type Stage = 'loading' | 'idle' | 'checklist' | 'running' | 'ended';
 
 interface AppProps {
@@ -55,7 +58,14 @@ export function App({ services, updates }: AppProps) {
   useEffect(() => {
     let isCancelled = false;
     void (async () => {
-      const loaded = await loadSettings(services.store);
+      let loaded = await loadSettings(services.store);
+      // sync: a set-up link from the lab server (#sync=<token>) fills in the server and token.
+      const link = readSyncLink(location.hash, location.origin);
+      if (link) {
+        loaded = { ...loaded, ...link };
+        await saveSettings(services.store, loaded);
+        history.replaceState(null, '', location.pathname + location.search);
+      }
       applySettings(services, loaded);
       if (isCancelled) return;
       setSettings(loaded);
@@ -80,6 +90,12 @@ export function App({ services, updates }: AppProps) {
     return () => {
       isCancelled = true;
     };
+  }, [services]);
+
+  // sync: send finished runs to the lab server (start-up, online, visible, backoff).
+  useEffect(() => {
+    void queueEndedRuns(services.store, services.outbox).catch(() => undefined);
+    return startSyncTriggers(services.outbox, { window, document, setTimeout, clearTimeout, nowMs: () => Date.now() });
   }, [services]);
 
   useEffect(() => {
@@ -193,6 +209,7 @@ export function App({ services, updates }: AppProps) {
             }}
           />
         )}
+        {screen === 'lab' && <LabTab settings={settings} />}
         {screen === 'settings' && <SettingsScreen settings={settings} services={services} onChange={changeSettings} />}
         {screen === 'watch' && stage === 'loading' && <p class="notice">Opening…</p>}
         {screen === 'watch' && stage === 'idle' && (
@@ -227,6 +244,7 @@ export function App({ services, updates }: AppProps) {
             backgroundNotice={backgroundNotice}
             onDismissBackgroundNotice={() => setBackgroundNotice(null)}
             onEnded={() => {
+              void services.outbox.queueRun(session.header.id);
               setEnded(session.header);
               setStage('ended');
             }}
@@ -240,6 +258,7 @@ export function App({ services, updates }: AppProps) {
               {ended.receivers.length} receiver{ended.receivers.length === 1 ? '' : 's'}, {ended.alerts.length} alarm
               {ended.alerts.length === 1 ? '' : 's'}. The record is kept on this phone.
             </p>
+            <RunSyncLine outbox={services.outbox} runId={ended.id} />
             <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
               Start another demo run
             </button>
@@ -265,6 +284,7 @@ export function App({ services, updates }: AppProps) {
       <nav class="tab-bar" aria-label="Screens">
         <button type="button" aria-current={screen === 'prepare' ? 'page' : undefined} onClick={() => setScreen('prepare')}>Prepare</button>
         <button type="button" aria-current={screen === 'watch' ? 'page' : undefined} onClick={() => setScreen('watch')}>Watch</button>
+        <button type="button" aria-current={screen === 'lab' ? 'page' : undefined} onClick={() => setScreen('lab')}>Lab</button>
         <button type="button" aria-current={screen === 'settings' ? 'page' : undefined} onClick={() => setScreen('settings')}>Settings</button>
       </nav>
     </div>

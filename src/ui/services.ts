@@ -3,7 +3,8 @@ import {
 } from '../alerts/index.ts';
 import { browserClock } from '../sensor/clock.ts';
 import { createSignalWatcher, type SessionDeps } from '../session/index.ts';
-import { checkStorage, idbKeyValueStore, type KeyValueStore, type StorageHealth } from '../store/index.ts';
+import { checkStorage, idbKeyValueStore, loadSettings, type KeyValueStore, type StorageHealth } from '../store/index.ts';
+import { Outbox, runJson, syncTargetFrom } from '../sync/index.ts';
 
 /** The browser's adapters, made once for the app and handed down (components never build them). */
 export interface AppServices {
@@ -12,6 +13,8 @@ export interface AppServices {
   wakeLock: ScreenWakeLock;
   notifier: AlarmNotifier;
   sessionDeps: SessionDeps;
+  /** Finished runs waiting for the lab's server (src/sync/README.md). */
+  outbox: Outbox;
   checkStorage(askPersist: boolean): Promise<StorageHealth>;
 }
 
@@ -20,11 +23,19 @@ export function createBrowserServices(): AppServices {
   const notifier = new AlarmNotifier(browserNotifierDeps());
   const alerter = new Alerter({ speech: new SpeechAnnouncer(), tone: new TonePlayer(), vibrate: vibrator().vibrate, notifier });
   const wakeLock = new ScreenWakeLock(browserWakeLockDeps());
+  const outbox = new Outbox({
+    store,
+    fetch: (input, init) => fetch(input, init),
+    target: async () => syncTargetFrom(await loadSettings(store), location.origin),
+    runJson: (runId) => runJson(store, runId),
+    nowMs: () => Date.now(),
+  });
   return {
     store,
     alerter,
     wakeLock,
     notifier,
+    outbox,
     sessionDeps: {
       store,
       clock: browserClock,

@@ -8,14 +8,17 @@ describe('settings', () => {
 
   it('saveSettings then loadSettings round-trips', async () => {
     const store = new MemoryStore();
-    const chosen: Settings = { speech: false, sound: true, vibration: false, demoSpeed: 120, temperatureUnit: 'degF', pressureUnit: 'mmHg', decimalSeparator: ',' };
+    const chosen: Settings = {
+      speech: false, sound: true, vibration: false, demoSpeed: 120, temperatureUnit: 'degF', pressureUnit: 'mmHg', decimalSeparator: ',',
+      syncServer: 'https://lab.example:8443/', syncToken: 'cb1.abc',
+    };
     await saveSettings(store, chosen);
     expect(await loadSettings(store)).toEqual(chosen);
   });
 
   it('loadSettings replaces malformed values with defaults and keeps the good ones', async () => {
     const store = new MemoryStore();
-    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3, temperatureUnit: 'K', pressureUnit: 'mmhg', decimalSeparator: ';' }]]);
+    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3, temperatureUnit: 'K', pressureUnit: 'mmhg', decimalSeparator: ';', syncToken: 42 }]]);
     expect(await loadSettings(store)).toEqual({ ...defaultSettings, sound: false });
   });
 

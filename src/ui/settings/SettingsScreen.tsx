@@ -2,6 +2,7 @@ import { pressureUnitSettings, type DecimalSeparatorSetting, type PressureUnitSe
 import './settings.css';
 import { localeDecimalSeparator } from '../units/index.ts';
 import type { AppServices } from '../services.ts';
+import { SyncSettings } from './SyncSettings.tsx';
 
 interface SettingsScreenProps {
   settings: Settings;
@@ -96,6 +97,8 @@ export function SettingsScreen({ settings, services, onChange }: SettingsScreenP
           </label>
         ))}
       </fieldset>
+
+      <SyncSettings settings={settings} services={services} onChange={onChange} />
     </section>
   );
 }

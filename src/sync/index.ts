@@ -1,0 +1,14 @@
+export { Outbox, outboxKey } from './outbox.ts';
+export type { OutboxDeps } from './outbox.ts';
+export type { RunSyncStatus, SyncState, SyncTarget } from './syncStatus.ts';
+export { retryDelayMs } from './backoff.ts';
+export { uploadRun, revisionUrl } from './uploadRun.ts';
+export type { UploadResult } from './uploadRun.ts';
+export { runJson } from './runJson.ts';
+export { syncTargetFrom, normaliseServerUrl } from './syncTarget.ts';
+export { readSyncLink } from './syncLink.ts';
+export { startSyncTriggers } from './syncTriggers.ts';
+export type { SyncTriggerEnv } from './syncTriggers.ts';
+export { fetchLabRuns, fetchLabRun, LabRequestError } from './labClient.ts';
+export type { LabRunItem, LabRunQuery } from './labClient.ts';
+export { queueEndedRuns } from './queueEndedRuns.ts';

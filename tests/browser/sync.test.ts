@@ -1,0 +1,51 @@
+import { afterAll, beforeAll, expect, inject, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchChromium, phoneContext } from './support/browser.ts';
+import { startDemoRun } from './support/demoRun.ts';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+it('a run finished offline is sent to the lab server when the network returns and shows in the lab view', async () => {
+  const context = await phoneContext(browser);
+  const page = await context.newPage();
+  // The set-up link the server prints: the app and the server share one address.
+  await page.goto(`${inject('baseUrl')}#sync=${encodeURIComponent(inject('syncToken'))}`);
+  await page.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+  });
+  await page.reload();
+  await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
+  expect(new URL(page.url()).hash).toBe('');
+
+  await context.setOffline(true);
+  await startDemoRun(page, 10);
+  await page.waitForFunction(() => {
+    const text = document.querySelector('[data-testid="elapsed"]')?.textContent;
+    return text !== undefined && text !== '0:00';
+  });
+  await page.getByRole('button', { name: 'End run' }).click();
+  await page.getByRole('dialog').getByRole('button', { name: 'End run' }).click();
+  await page.getByRole('heading', { name: 'Run ended' }).waitFor();
+  const line = page.getByTestId('sync-state');
+  await page.waitForFunction(() => document.querySelector('[data-testid="sync-state"]')?.getAttribute('data-state') === 'failed');
+  expect(await line.textContent()).toMatch(/not sent yet.*could not be reached/);
+
+  await context.setOffline(false);
+  await page.waitForFunction(() => document.querySelector('[data-testid="sync-state"]')?.getAttribute('data-state') === 'synced', null, { timeout: 30_000 });
+
+  await page.getByRole('button', { name: 'Lab' }).click();
+  const run = page.getByRole('button', { name: /Demo:/ });
+  await run.first().waitFor();
+  expect(await run.count()).toBe(1);
+  expect(await run.textContent()).toMatch(/from browser test phone/);
+  await run.click();
+  await page.getByRole('heading', { name: /^Demo:/ }).waitFor();
+  expect(await page.getByRole('heading', { name: 'Receivers' }).count()).toBe(1);
+  await context.close();
+});
