@@ -7,6 +7,11 @@ import { defaultSettings, loadSettings, saveSettings, type Settings } from '../s
 import { AlarmBanner } from './alarm/AlarmBanner.tsx';
 import { PreHeatChecklist } from './prepare/PreHeatChecklist.tsx';
 import type { AppServices } from './services.ts';
+import type { SensorSetup } from '../sensor/sensorSetup.ts';
+import type { ConnectedSensor } from './sensor/connectedSensor.ts';
+import { LazyConnectSensor } from './sensor/LazyConnectSensor.tsx';
+import { SensorPanel } from './sensor/SensorPanel.tsx';
+import { resumeSensorRun, sensorLiveSource } from './sensor/sensorRun.ts';
 import { SettingsScreen } from './settings/SettingsScreen.tsx';
 import type { UpdateService } from './update/pwaUpdate.ts';
 import { UpdateNotice } from './update/UpdateNotice.tsx';
@@ -15,7 +20,7 @@ import { formatElapsed } from './watch/format.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
 
 type Screen = 'watch' | 'settings';
-type Stage = 'loading' | 'idle' | 'checklist' | 'running' | 'ended';
+type Stage = 'loading' | 'idle' | 'connect' | 'checklist' | 'running' | 'ended';
 
 interface AppProps {
   services: AppServices;
@@ -40,6 +45,9 @@ export function App({ services, updates }: AppProps) {
   const [storageWarning, setStorageWarning] = useState<string | null>(null);
   const [startError, setStartError] = useState<string | null>(null);
   const hiddenAt = useRef<number | null>(null);
+  // Sensor (src/ui/sensor): the connected sensor before heat on; a reopened run's sensor awaiting a tap.
+  const [sensor, setSensor] = useState<ConnectedSensor | null>(null);
+  const [restoredSensor, setRestoredSensor] = useState<SensorSetup | null>(null);
   useSessionVersion(session);
 
   const makeDemoSource = (speed: number, saved?: DemoStillSnapshot): LiveSource =>
@@ -54,13 +62,16 @@ export function App({ services, updates }: AppProps) {
       if (isCancelled) return;
       setSettings(loaded);
       try {
-        const restored = await RunSession.restore(services.sessionDeps, (header, saved) =>
-          header.source.kind === 'simulated' ? makeDemoSource(loaded.demoSpeed, saved as DemoStillSnapshot | undefined) : null,
-        );
+        let savedSource: unknown;
+        const restored = await RunSession.restore(services.sessionDeps, (header, saved) => {
+          savedSource = saved;
+          return header.source.kind === 'simulated' ? makeDemoSource(loaded.demoSpeed, saved as DemoStillSnapshot | undefined) : null;
+        });
         if (isCancelled) return;
         if (restored) {
           setSession(restored);
           setStage('running');
+          if (restored.header.source.kind !== 'simulated') setRestoredSensor(await resumeSensorRun(restored, savedSource));
         } else {
           setStage('idle');
         }
@@ -111,7 +122,7 @@ export function App({ services, updates }: AppProps) {
     void saveSettings(services.store, next);
   };
 
-  const startDemoRun = async () => {
+  const startRun = async (connected: ConnectedSensor | null = null) => {
     setStartError(null);
     // Inside the tap: sound and notifications need a user gesture.
     await services.alerter.unlock();
@@ -122,16 +133,22 @@ export function App({ services, updates }: AppProps) {
         services.sessionDeps,
         {
           id: `run-${Date.now().toString(36)}`,
-          title: `Demo: ${demoMixture.title}`,
           device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser',
-          source: { kind: 'simulated', label: 'Simulated run (demo)' },
-          charge: demoMixture.components.map((name, i) => ({ name, amount: demoMixture.chargeMl[i]!, unit: 'mL' as const })),
-          pressurePa: 101_325,
-          column: { description: 'demo column', theoretical_plates: 4 },
-          plan: toRunPlan(demoCutPlan(101_325, 4), 101_325, 4),
+          ...(connected
+            ? { title: `Run with ${connected.bridge.label}`, source: { kind: connected.setup.kind, label: connected.bridge.label } }
+            : {
+                title: `Demo: ${demoMixture.title}`,
+                source: { kind: 'simulated', label: 'Simulated run (demo)' },
+                charge: demoMixture.components.map((name, i) => ({ name, amount: demoMixture.chargeMl[i]!, unit: 'mL' as const })),
+                pressurePa: 101_325,
+                column: { description: 'demo column', theoretical_plates: 4 },
+                plan: toRunPlan(demoCutPlan(101_325, 4), 101_325, 4),
+              }),
         },
-        makeDemoSource(settings.demoSpeed),
+        connected ? sensorLiveSource(connected) : makeDemoSource(settings.demoSpeed),
       );
+      setSensor(null);
+      setRestoredSensor(null);
       setSession(started);
       setEnded(null);
       setStage('running');
@@ -170,13 +187,34 @@ export function App({ services, updates }: AppProps) {
               No sensor yet? Try the demo: a simulated still recovering {demoMixture.title}, {demoMixture.chargeMl[0]} mL of each,
               at {settings.demoSpeed}× speed (change it in Settings).
             </p>
-            <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
-              Start demo run
-            </button>
+            <div class="run-actions">
+              <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
+                Start demo run
+              </button>
+              <button type="button" class="action action-quiet" onClick={() => setStage('connect')}>Connect a sensor</button>
+            </div>
           </section>
         )}
+        {screen === 'watch' && stage === 'connect' && (
+          <LazyConnectSensor
+            onConnected={(connected) => {
+              setSensor(connected);
+              setStage('checklist');
+            }}
+            onDemo={() => setStage('checklist')}
+            onCancel={() => setStage('idle')}
+          />
+        )}
         {screen === 'watch' && stage === 'checklist' && (
-          <PreHeatChecklist startLabel="Heat on: start the run" onStart={() => void startDemoRun()} onBack={() => setStage('idle')} />
+          <PreHeatChecklist
+            startLabel="Heat on: start the run"
+            onStart={() => void startRun(sensor)}
+            onBack={() => {
+              void sensor?.bridge.stop();
+              setSensor(null);
+              setStage('idle');
+            }}
+          />
         )}
         {screen === 'watch' && (stage === 'running' || stage === 'ended') && session && (
           <WatchScreen
@@ -187,6 +225,14 @@ export function App({ services, updates }: AppProps) {
               setEnded(session.header);
               setStage('ended');
             }}
+            sensorPanel={
+              <SensorPanel
+                session={session}
+                restoredSetup={restoredSensor}
+                onRestoredReconnected={() => setRestoredSensor(null)}
+                onReminder={() => services.alerter.channels.tone.play('reminder')}
+              />
+            }
           />
         )}
         {screen === 'watch' && stage === 'ended' && ended && (
