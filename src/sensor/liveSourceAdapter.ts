@@ -25,6 +25,8 @@ export interface LiveSourceAdapterOptions {
    * run passes its own start so the readings carry on from the same origin.
    */
   runStartS?: number;
+  /** See LiveSource.silenceLimitMs: for typed readings, a little over the reminder interval. */
+  silenceLimitMs?: number;
   /** What to save with the run so a reopened app can rebuild the bridge (its settings). */
   snapshot?: unknown;
 }
@@ -79,6 +81,7 @@ export function adaptReadingSource(bridge: ReadingSource, options: LiveSourceAda
     kind: options.kind,
     label: options.label ?? bridge.label,
     bridge,
+    silenceLimitMs: options.silenceLimitMs,
     get status() {
       return { ...bridge.status, timeS: shift(bridge.status.timeS) };
     },

@@ -161,8 +161,10 @@ describe('adaptReadingSource', () => {
 
   it('snapshot() returns the settings saved with the run; isSensorLiveSource() tells bridges apart', () => {
     const bridge = new FakeBridge();
-    const source = adaptReadingSource(bridge, { kind: 'serial', clock: () => 0, snapshot: { baudRate: 9600 } });
+    const source = adaptReadingSource(bridge, { kind: 'serial', clock: () => 0, snapshot: { baudRate: 9600 }, silenceLimitMs: 120_000 });
     expect(source.snapshot?.()).toEqual({ baudRate: 9600 });
+    expect(source.silenceLimitMs).toBe(120_000);
+    expect(adaptReadingSource(bridge, { kind: 'serial', clock: () => 0 }).silenceLimitMs).toBeUndefined();
     expect(isSensorLiveSource(source)).toBe(true);
     expect(isSensorLiveSource({ kind: 'simulated', label: 'demo', start() {}, stop() {} })).toBe(false);
     expect(isSensorLiveSource(null)).toBe(false);

@@ -6,7 +6,9 @@ import type { ConnectedSensor } from './connectedSensor.ts';
 
 /** A connected sensor as the run's source; its setup is saved with the run for a reopened app. */
 export function sensorLiveSource({ setup, bridge }: ConnectedSensor, runStartS?: number): SensorLiveSource {
-  return adaptReadingSource(bridge, { kind: setup.kind, label: bridge.label, clock: wallClockS, snapshot: setup, runStartS });
+  // A typed reading is due every interval; the sensor alarm waits for a second one to be missed.
+  const silenceLimitMs = setup.kind === 'typed' ? 2 * setup.reminderEveryS * 1000 : undefined;
+  return adaptReadingSource(bridge, { kind: setup.kind, label: bridge.label, clock: wallClockS, snapshot: setup, runStartS, silenceLimitMs });
 }
 
 const runStartS = (session: RunSession) => Date.parse(session.header.started_at) / 1000;
