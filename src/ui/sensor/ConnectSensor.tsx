@@ -145,7 +145,7 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, env, capabilities
                 <strong>{c.title}</strong>
                 <span>{c.detail}</span>
               </button>
-              <p class="source-why" data-available={c.isAvailable}>{c.isAvailable ? c.why : `Not available: ${c.why}`}</p>
+              <p class="source-why" data-available={c.isAvailable}>{c.isAvailable || c.why.startsWith('Not ') ? c.why : `Not available here. ${c.why}`}</p>
             </li>
           ))}
         </ul>
