@@ -21,6 +21,14 @@ async function throughChecklist(page: Page): Promise<void> {
   await page.getByTestId('head-temp').waitFor();
 }
 
+async function connectSerialBoard(page: Page): Promise<void> {
+  await page.getByRole('button', { name: 'Connect a sensor' }).click();
+  await page.getByRole('button', { name: /Thermocouple board or meter/ }).click();
+  await page.getByRole('button', { name: 'Choose the serial port' }).click();
+  await page.getByRole('radio', { name: /head_c/ }).waitFor();
+  await page.getByRole('button', { name: 'Use this sensor' }).click();
+}
+
 const headTemp = (page: Page) => page.getByTestId('head-temp').textContent();
 
 describe('sensor connection on a phone', () => {
@@ -61,6 +69,41 @@ describe('sensor connection on a phone', () => {
     await expect.poll(() => headTemp(page), { timeout: 5000 }).toMatch(/^80\.5°C$/);
     expect(await page.getByTestId('sensor-status').textContent()).toMatch(/reconnected/);
     expect(await page.evaluate(() => (window as unknown as { __board: { opens: number } }).__board.opens)).toBe(2);
+    await context.close();
+  });
+
+  it('a run reopened after a reload reconnects the granted port by itself, or with one tap when it is not there', async () => {
+    const context = await phoneContext(browser);
+    await context.addInitScript(recordAlertsScript);
+    await context.addInitScript(fakeSerialScript);
+    const page = await context.newPage();
+    await page.goto(inject('baseUrl'));
+    await connectSerialBoard(page);
+    await throughChecklist(page);
+    await expect.poll(() => headTemp(page), { timeout: 5000 }).toMatch(/^78\.3°C$/);
+    await page.waitForTimeout(1500); // the journal flushes every second
+
+    // The same port is still granted: getPorts() offers it and the run carries on with no tap.
+    await page.reload();
+    await page.evaluate(() => (window as unknown as { __board: { setHeadC(v: number): void } }).__board.setHeadC(79.5));
+    await expect.poll(() => headTemp(page), { timeout: 8000 }).toMatch(/^79\.5°C$/);
+    expect(await page.getByTestId('sensor-status').textContent()).toMatch(/Web Serial: reading/);
+    expect(await page.getByTestId('gap-notice').textContent()).toMatch(/Run reopened/);
+    await page.waitForTimeout(1500);
+
+    // Reopened with the board unplugged: the Watch screen offers the reconnect.
+    await page.evaluate(() => sessionStorage.setItem('fake-board-unplugged', '1'));
+    await page.reload();
+    const reconnect = page.getByRole('button', { name: 'Reconnect sensor' });
+    await reconnect.waitFor({ timeout: 8000 });
+    await page.evaluate(() => {
+      const board = (window as unknown as { __board: { setHeadC(v: number): void; plugIn(): void } }).__board;
+      board.setHeadC(81.5);
+      board.plugIn();
+    });
+    await reconnect.click();
+    await expect.poll(() => headTemp(page), { timeout: 8000 }).toMatch(/^81\.5°C$/);
+    expect(await reconnect.count()).toBe(0);
     await context.close();
   });
 

@@ -3,11 +3,12 @@
  * the streams and prints `head_c=...` lines on a timer, like a thermocouple board. The test
  * plays the cable through window.__board: unplug() errors the stream as Chrome does when the
  * device goes, plugIn() lets getPorts() offer the port again, setHeadC() changes what it prints.
+ * With sessionStorage 'fake-board-unplugged' set, the page (after a reload) starts unplugged.
  */
 export const fakeSerialScript = `
 (() => {
   const encoder = new TextEncoder();
-  const board = { isPluggedIn: true, opens: 0, headC: 78.25, lines: 0 };
+  const board = { isPluggedIn: sessionStorage.getItem('fake-board-unplugged') === null, opens: 0, headC: 78.25, lines: 0 };
   let controller = null;
   let timer = null;
   const stopPrinting = () => { clearInterval(timer); timer = null; };
