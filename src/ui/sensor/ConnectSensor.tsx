@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'preact/hooks';
+import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import { browserSensorEnvironment } from '../../sensor/browserEnvironment.ts';
 import { describeCapabilities, fromNavigator, type SourceCapability } from '../../sensor/capabilities.ts';
 import type { LineEnding } from '../../sensor/protocols/lineSplitter.ts';
@@ -102,7 +102,12 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, env, capabilities
   const [error, setError] = useState<string | null>(null);
   const [isBusy, setBusy] = useState(false);
 
+  // A bridge opened here but not accepted is released when the screen goes (another tab, Back).
+  const unaccepted = useRef<ReadingSource | null>(null);
+  useEffect(() => () => void unaccepted.current?.stop(), []);
+
   const disconnect = () => {
+    unaccepted.current = null;
     void connected?.bridge.stop();
     setConnected(null);
     setFormat(null);
@@ -119,7 +124,10 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, env, capabilities
       await bridge.start();
       const sensor = { setup, bridge };
       if (setup.kind === 'typed') onConnected(sensor);
-      else setConnected(sensor);
+      else {
+        unaccepted.current = bridge;
+        setConnected(sensor);
+      }
     } catch (caught) {
       const message = caught instanceof Error ? caught.message : String(caught);
       setError(/NotFoundError|No port selected|cancel/i.test(message) ? 'No device was chosen. Plug it in and try again.' : `Could not connect: ${message}`);
@@ -131,6 +139,7 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, env, capabilities
   const accept = () => {
     if (!connected) return;
     const { setup, bridge } = connected;
+    unaccepted.current = null;
     onConnected({ bridge, setup: (setup.kind === 'serial' || setup.kind === 'usb') && format ? { ...setup, format } : setup });
   };
 

@@ -55,7 +55,22 @@ describe('ConnectSensor', () => {
     button(/Use this sensor/).click();
     expect(connected).toHaveLength(1);
     expect(connected[0]!.setup).toMatchObject({ kind: 'serial', baudRate: 9600, format: { field: { kind: 'name', name: 'head_c' } } });
+    render(null, host); // the flow gives way to the checklist: the accepted port stays open
+    await wait(20);
+    expect(port.isOpen).toBe(true);
     await connected[0]!.bridge.stop();
+  });
+
+  it('a port opened for the preview is closed when the screen goes without accepting it', async () => {
+    const { serial, button } = mount();
+    button(/Web Serial/).click();
+    await wait(0);
+    button(/Choose the serial port/).click();
+    await wait(20);
+    expect(serial.ports[0]!.isOpen).toBe(true);
+    render(null, host);
+    await wait(20);
+    expect(serial.ports[0]!.isOpen).toBe(false);
   });
 
   it('a Modbus address outside 1-247 gets a plain message and no port is asked for', async () => {
