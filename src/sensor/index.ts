@@ -10,3 +10,4 @@ export { createUsbSerial, usbSerialLimits, type UsbLike } from './usbSerial.ts';
 export { createBluetoothSource, type BluetoothLike, type BluetoothSourceOptions } from './bluetoothSource.ts';
 export { createManualSource, type ManualSource, type ManualSourceOptions, type EntryOutcome } from './manualSource.ts';
 export { describeCapabilities, fromNavigator, type BrowserFacts, type SourceCapability } from './capabilities.ts';
+export { adaptReadingSource, isSensorLiveSource, type SensorLiveSource, type LiveSourceAdapterOptions } from './liveSourceAdapter.ts';

@@ -191,9 +191,15 @@ export class SerialLink {
     if (!this.running) return;
     try {
       const port = this.pick(await this.options.serial.getPorts());
+      // stop() may have run while getPorts() or open() was pending: never leave a port open then.
+      if (!this.running) return;
       if (port) {
         this.port = port;
         await this.openPort(port);
+        if (!this.running) {
+          await this.closePort();
+          return;
+        }
         this.options.hub.setStatus('live', 'serial device reconnected');
         this.loopDone = this.readLoop();
         return;

@@ -1,6 +1,9 @@
 import { SerialPort as PolyfillSerialPort } from 'web-serial-polyfill';
 import type { SerialLike, SerialPortLike } from './serialTypes.ts';
 
+// Apart from the polyfill, so the connection screen can show it without loading WebUSB code.
+export { usbSerialLimits } from './usbSerialLimits.ts';
+
 /** The parts of WebUSB used here (`navigator.usb`). */
 export interface UsbLike {
   requestDevice(options: { filters: { classCode?: number; vendorId?: number; productId?: number }[] }): Promise<unknown>;
@@ -10,16 +13,6 @@ export interface UsbLike {
 /** USB class 2, Communications Device Class: the only adapters the polyfill can drive. */
 const cdcClass = 2;
 
-/**
- * Plain words for the chemist on what the USB route cannot reach, shown beside the button.
- */
-export const usbSerialLimits =
-  'Through USB the app can talk only to boards that present themselves as a standard USB serial ' +
-  'device (CDC-ACM): most Arduino-compatible boards with native USB, Raspberry Pi Pico, many ' +
-  'ESP32-S2/S3 boards. It cannot reach adapters that need their own driver: FTDI, Silicon Labs ' +
-  'CP210x and WCH CH340 chips, found on many cheap boards and USB cables. On some phones the ' +
-  'system itself holds the device ("Unable to claim interface"); then use Bluetooth or type the ' +
-  'readings in.';
 
 /**
  * A `navigator.serial` look-alike over WebUSB, for browsers without Web Serial (Android), built

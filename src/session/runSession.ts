@@ -275,7 +275,7 @@ export class RunSession {
   #tick(): void {
     if (this.#isEnded) return;
     const nowMs = this.#deps.wallMs();
-    if (this.#source && nowMs - this.#lastReadingWallMs > this.#timings.sensorSilenceMs) {
+    if (this.#source && nowMs - this.#lastReadingWallMs > (this.#source.silenceLimitMs ?? this.#timings.sensorSilenceMs)) {
       const { kind, message, action } = sensorSilentWording;
       if (this.#alarms.raise(kind, message, action, this.#runTimeS(), nowMs)) this.#changed();
     }

@@ -11,6 +11,11 @@ export interface LiveSource {
   /** Delivers readings in batches until stopped or the signal aborts. */
   start(onReadings: (batch: SessionReading[]) => void, signal: AbortSignal): void;
   stop(): void;
+  /**
+   * No reading for this long raises the sensor alarm, where the session's default (5 s) does not
+   * fit: typed readings come a minute or more apart. Units: ms
+   */
+  readonly silenceLimitMs?: number;
   /** State saved with the run so a reopened app can carry the source on (the simulator has one). */
   snapshot?(): unknown;
 }

@@ -12,6 +12,11 @@ import { PreHeatChecklist } from './prepare/PreHeatChecklist.tsx';
 import { LazyPrepareScreen } from './prepare/LazyPrepareScreen.tsx';
 import type { PreparedRun } from './prepare/preparedRun.ts';
 import type { AppServices } from './services.ts';
+import type { SensorSetup } from '../sensor/sensorSetup.ts';
+import type { ConnectedSensor } from './sensor/connectedSensor.ts';
+import { LazyConnectSensor } from './sensor/LazyConnectSensor.tsx';
+import { SensorPanel } from './sensor/SensorPanel.tsx';
+import { resumeSensorRun, sensorLiveSource } from './sensor/sensorRun.ts';
 import { SettingsScreen } from './settings/SettingsScreen.tsx';
 import { RunSyncLine } from './sync/RunSyncLine.tsx';
 import type { UpdateService } from './update/pwaUpdate.ts';
@@ -21,7 +26,7 @@ import { formatElapsed } from './watch/format.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
 
 type Screen = 'watch' | 'prepare' | 'settings' | 'lab';
-type Stage = 'loading' | 'idle' | 'checklist' | 'running' | 'ended';
+type Stage = 'loading' | 'idle' | 'connect' | 'checklist' | 'running' | 'ended';
 
 interface AppProps {
   services: AppServices;
@@ -47,6 +52,9 @@ export function App({ services, updates }: AppProps) {
   const [startError, setStartError] = useState<string | null>(null);
   const hiddenAt = useRef<number | null>(null);
   const [prepared, setPrepared] = useState<PreparedRun | null>(null);
+  // Sensor (src/ui/sensor): the connected sensor before heat on; a reopened run's sensor awaiting a tap.
+  const [sensor, setSensor] = useState<ConnectedSensor | null>(null);
+  const [restoredSensor, setRestoredSensor] = useState<SensorSetup | null>(null);
   useSessionVersion(session);
 
   // `#demo-interval=0.1` in the address gives the demo 10 readings a second (bench/watch-soak).
@@ -70,13 +78,16 @@ export function App({ services, updates }: AppProps) {
       if (isCancelled) return;
       setSettings(loaded);
       try {
-        const restored = await RunSession.restore(services.sessionDeps, (header, saved) =>
-          header.source.kind === 'simulated' ? makeDemoSource(loaded.demoSpeed, saved as DemoStillSnapshot | undefined) : null,
-        );
+        let savedSource: unknown;
+        const restored = await RunSession.restore(services.sessionDeps, (header, saved) => {
+          savedSource = saved;
+          return header.source.kind === 'simulated' ? makeDemoSource(loaded.demoSpeed, saved as DemoStillSnapshot | undefined) : null;
+        });
         if (isCancelled) return;
         if (restored) {
           setSession(restored);
           setStage('running');
+          if (restored.header.source.kind !== 'simulated') setRestoredSensor(await resumeSensorRun(restored, savedSource));
         } else {
           setStage('idle');
         }
@@ -133,41 +144,39 @@ export function App({ services, updates }: AppProps) {
     void saveSettings(services.store, next);
   };
 
-  const startDemoRun = async () => {
+  const startRun = async (connected: ConnectedSensor | null = null) => {
     setStartError(null);
     // Inside the tap: sound and notifications need a user gesture.
     await services.alerter.unlock();
     void services.notifier.ask().catch(() => undefined);
     void services.checkStorage(true).then((health) => setStorageWarning(health.warning));
+    // What is in the pot: the prepared plan, or with neither plan nor sensor the demo charge.
+    const what = prepared
+      ? { title: prepared.title, charge: prepared.charge, pressurePa: prepared.pressurePa, column: prepared.column, plan: prepared.plan }
+      : connected
+        ? { title: `Run with ${connected.bridge.label}` }
+        : {
+            title: `Demo: ${demoMixture.title}`,
+            charge: demoMixture.components.map((name, i) => ({ name, amount: demoMixture.chargeMl[i]!, unit: 'mL' as const })),
+            pressurePa: 101_325,
+            column: { description: 'demo column', theoretical_plates: 4 },
+            plan: toRunPlan(demoCutPlan(101_325, 4), 101_325, 4),
+          };
+    // Where the readings come from: the connected sensor, else the demo still.
+    const source = connected
+      ? sensorLiveSource(connected)
+      : makeDemoSource(settings.demoSpeed, undefined, prepared ? { pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates ?? 4 } : {});
+    const sourceInfo = connected
+      ? { kind: connected.setup.kind, label: connected.bridge.label }
+      : { kind: 'simulated', label: prepared ? 'Simulated run (demo still, not your apparatus)' : 'Simulated run (demo)' };
     try {
-      // A prepared run: its plan, charge, pressure and column, driven by the demo still for now.
-      const started = prepared ? await RunSession.start(
+      const started = await RunSession.start(
         services.sessionDeps,
-        {
-          id: `run-${Date.now().toString(36)}`,
-          title: prepared.title,
-          device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser',
-          source: { kind: 'simulated', label: 'Simulated run (demo still, not your apparatus)' },
-          charge: prepared.charge,
-          pressurePa: prepared.pressurePa,
-          column: prepared.column,
-          plan: prepared.plan,
-        },
-        makeDemoSource(settings.demoSpeed, undefined, { pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates }),
-      ) : await RunSession.start(
-        services.sessionDeps,
-        {
-          id: `run-${Date.now().toString(36)}`,
-          title: `Demo: ${demoMixture.title}`,
-          device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser',
-          source: { kind: 'simulated', label: 'Simulated run (demo)' },
-          charge: demoMixture.components.map((name, i) => ({ name, amount: demoMixture.chargeMl[i]!, unit: 'mL' as const })),
-          pressurePa: 101_325,
-          column: { description: 'demo column', theoretical_plates: 4 },
-          plan: toRunPlan(demoCutPlan(101_325, 4), 101_325, 4),
-        },
-        makeDemoSource(settings.demoSpeed),
+        { id: `run-${Date.now().toString(36)}`, device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser', source: sourceInfo, ...what },
+        source,
       );
+      setSensor(null);
+      setRestoredSensor(null);
       setSession(started);
       setPrepared(null);
       setEnded(null);
@@ -205,7 +214,7 @@ export function App({ services, updates }: AppProps) {
             onContinue={(run) => {
               setPrepared(run);
               setScreen('watch');
-              setStage('checklist');
+              setStage('idle');
             }}
           />
         )}
@@ -215,25 +224,58 @@ export function App({ services, updates }: AppProps) {
         {screen === 'watch' && stage === 'idle' && (
           <section class="start" aria-labelledby="start-title">
             <h1 id="start-title" class="screen-title">Watch</h1>
-            <h2>Start a run</h2>
-            <p>
-              No sensor yet? Try the demo: a simulated still recovering {demoMixture.title}, {demoMixture.chargeMl[0]} mL of each,
-              at {settings.demoSpeed}× speed (change it in Settings).
-            </p>
-            <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
-              Start demo run
-            </button>
+            {prepared ? (
+              <>
+                <h2>Ready: {prepared.title}</h2>
+                <p>
+                  Connect the head thermometer, or try the plan on the demo still first (simulated readings, not your
+                  apparatus).
+                </p>
+                <div class="run-actions">
+                  <button type="button" class="action action-start" onClick={() => setStage('connect')}>Connect a sensor</button>
+                  <button type="button" class="action action-quiet" onClick={() => setStage('checklist')}>Simulate it</button>
+                  <button type="button" class="action action-quiet" onClick={() => {
+                    setPrepared(null);
+                    setScreen('prepare');
+                  }}>Back to Prepare</button>
+                </div>
+              </>
+            ) : (
+              <>
+                <h2>Start a run</h2>
+                <p>
+                  Plan a charge on Prepare, connect a sensor, or try the demo: a simulated still recovering {demoMixture.title},{' '}
+                  {demoMixture.chargeMl[0]} mL of each, at {settings.demoSpeed}× speed (change it in Settings).
+                </p>
+                <div class="run-actions">
+                  <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
+                    Start demo run
+                  </button>
+                  <button type="button" class="action action-quiet" onClick={() => setStage('connect')}>Connect a sensor</button>
+                </div>
+              </>
+            )}
           </section>
+        )}
+        {screen === 'watch' && stage === 'connect' && (
+          <LazyConnectSensor
+            onConnected={(connected) => {
+              setSensor(connected);
+              setStage('checklist');
+            }}
+            onDemo={() => setStage('checklist')}
+            onCancel={() => setStage('idle')}
+          />
         )}
         {screen === 'watch' && stage === 'checklist' && (
           <PreHeatChecklist
             key={prepared ? prepared.title : 'demo'}
             extraChecks={prepared?.extraChecks}
             startLabel="Heat on: start the run"
-            onStart={() => void startDemoRun()}
+            onStart={() => void startRun(sensor)}
             onBack={() => {
-              if (prepared) setScreen('prepare');
-              setPrepared(null);
+              void sensor?.bridge.stop();
+              setSensor(null);
               setStage('idle');
             }}
           />
@@ -248,6 +290,14 @@ export function App({ services, updates }: AppProps) {
               setEnded(session.header);
               setStage('ended');
             }}
+            sensorPanel={
+              <SensorPanel
+                session={session}
+                restoredSetup={restoredSensor}
+                onRestoredReconnected={() => setRestoredSensor(null)}
+                onReminder={() => services.alerter.channels.tone.play('reminder')}
+              />
+            }
           />
         )}
         {screen === 'watch' && stage === 'ended' && ended && (

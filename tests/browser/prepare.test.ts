@@ -50,7 +50,8 @@ describe('Prepare screen on a phone', () => {
     await upper.fill('70.5');
     await page.waitForTimeout(600);
     expect(await upper.inputValue()).toBe('70.5');
-    await page.getByRole('button', { name: 'Continue to checklist' }).click();
+    await page.getByRole('button', { name: 'Use this plan' }).click();
+    await page.getByRole('button', { name: 'Simulate it' }).click();
     await page.getByRole('heading', { name: 'Before heat on' }).waitFor();
     const boxes = page.getByRole('checkbox');
     const count = await boxes.count();

@@ -140,6 +140,19 @@ describe('RunSession', () => {
     expect(session.standingAlarms()).toHaveLength(1);
   });
 
+  it("a source's silenceLimitMs (typed readings a minute apart) replaces the 5 s sensor alarm limit", async () => {
+    const h = harness();
+    const source = Object.assign(new ManualSource(), { silenceLimitMs: 120_000 });
+    const session = await RunSession.start(h.deps, run, source);
+    source.send([0, 20]);
+    await h.advance(60_000);
+    source.send([60, 20.5]);
+    await h.advance(119_000);
+    expect(session.standingAlarms()).toHaveLength(0);
+    await h.advance(1500);
+    expect(session.standingAlarms().map((a) => a.kind)).toEqual(['sensor-lost']);
+  });
+
   it('restores the run after the app was killed: readings, watcher state, alarms, and a marked gap', async () => {
     const store = new MemoryStore();
     const first = harness(new Map([[3, { time_s: 3, event: 'breakthrough', head_c: 80 }]]), store);

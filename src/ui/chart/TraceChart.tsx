@@ -2,6 +2,7 @@ import { useEffect, useRef } from 'preact/hooks';
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 import { downsampleMinMax, type ReadingBuffer } from '../../run/index.ts';
+import { nanGaps } from './nanGaps.ts';
 
 export interface TemperatureBand {
   fromC: number;
@@ -69,7 +70,20 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
         { stroke: ink, grid: { stroke: grid, width: 1 }, values: (_u, ticks) => ticks.map((s) => `${Math.round(s / 60)}`), size: 32 },
         { stroke: ink, grid: { stroke: grid, width: 1 }, size: 40 },
       ],
-      series: [{}, { stroke: cssColour('--trace', '#0b7285'), width: 2, points: { show: false }, spanGaps: false }],
+      series: [
+        {},
+        {
+          stroke: cssColour('--trace', '#0b7285'),
+          width: 2,
+          points: { show: false },
+          spanGaps: false,
+          // A lost sensor leaves NaN readings: show the gap instead of a line across it.
+          gaps: (u, seriesIndex, from, to, found) => [
+            ...found,
+            ...nanGaps(u.data[0], u.data[seriesIndex] as ArrayLike<number>, from, to, (t) => Math.round(u.valToPos(t, 'x', true))),
+          ],
+        },
+      ],
       hooks: {
         drawAxes: [
           (u) => {

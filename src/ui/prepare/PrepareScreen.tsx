@@ -171,7 +171,7 @@ export function PrepareScreen({ store, settings, isRunGoing, onContinue, bridge:
         </p>
         {isRunGoing && <p class="warning">A run is going: end it on the Watch screen before starting another.</p>}
         <button type="button" class="action action-start" disabled={!isCurrent || isRunGoing} onClick={continueRun}>
-          Continue to checklist
+          Use this plan
         </button>
       </div>
     </section>

@@ -1,3 +1,4 @@
+import type { ComponentChildren } from 'preact';
 import { useState } from 'preact/hooks';
 import { headRateCPerMin } from '../../run/index.ts';
 import type { RunSession } from '../../session/index.ts';
@@ -24,10 +25,12 @@ interface WatchScreenProps {
   backgroundNotice: string | null;
   onDismissBackgroundNotice(): void;
   onEnded(): void;
+  /** The sensor's status, reconnect and keypad (src/ui/sensor), under the head temperature. */
+  sensorPanel?: ComponentChildren;
 }
 
 /** The live run: what a chemist glances at from across the hood, and the few taps they need. */
-export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNotice, onEnded }: WatchScreenProps) {
+export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNotice, onEnded, sensorPanel }: WatchScreenProps) {
   const version = useSessionVersion(session);
   const [dialog, setDialog] = useState<'end' | 'note' | 'heat' | null>(null);
   const { readings, header } = session;
@@ -62,6 +65,7 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
         </span>
         <span class="head-state" data-testid="watch-state">{stateWords(session.watcherState, session.plateauC, hasVapour)}</span>
       </div>
+      {sensorPanel}
 
       {session.storageError && <p class="warning" role="alert">{session.storageError}</p>}
       {backgroundNotice && (
