@@ -17,3 +17,5 @@ export { runTraceCsv } from './runTraceCsv.ts';
 export { runFromTraceCsv } from './traceImport.ts';
 export type { TraceImport } from './traceImport.ts';
 export { parseRunRecordJson, runRecordToJson, RunFileError } from './runFile.ts';
+export { duplicatePlan } from './duplicatePlan.ts';
+export type { RunDraft } from './duplicatePlan.ts';

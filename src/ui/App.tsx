@@ -13,8 +13,11 @@ import { UpdateNotice } from './update/UpdateNotice.tsx';
 import { useSessionVersion } from './useSession.ts';
 import { formatElapsed } from './watch/format.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
+// Runs, Fractions, Report (loaded on demand).
+import { LazyRunsArea } from './runs/LazyRunsArea.tsx';
+import type { RunView } from './runs/RunsArea.tsx';
 
-type Screen = 'watch' | 'settings';
+type Screen = 'watch' | 'settings' | 'runs';
 type Stage = 'loading' | 'idle' | 'checklist' | 'running' | 'ended';
 
 interface AppProps {
@@ -40,6 +43,11 @@ export function App({ services, updates }: AppProps) {
   const [storageWarning, setStorageWarning] = useState<string | null>(null);
   const [startError, setStartError] = useState<string | null>(null);
   const hiddenAt = useRef<number | null>(null);
+  const [runView, setRunView] = useState<RunView>(null);
+  const openRun = (runId: string, view: 'fractions' | 'report') => {
+    setRunView({ runId, view });
+    setScreen('runs');
+  };
   useSessionVersion(session);
 
   const makeDemoSource = (speed: number, saved?: DemoStillSnapshot): LiveSource =>
@@ -160,6 +168,7 @@ export function App({ services, updates }: AppProps) {
       {startError && <p class="warning" role="alert">{startError}</p>}
 
       <main>
+        {screen === 'runs' && <LazyRunsArea store={services.store} open={runView} onOpenChange={setRunView} />}
         {screen === 'settings' && <SettingsScreen settings={settings} services={services} onChange={changeSettings} />}
         {screen === 'watch' && stage === 'loading' && <p class="notice">Opening…</p>}
         {screen === 'watch' && stage === 'idle' && (
@@ -197,6 +206,10 @@ export function App({ services, updates }: AppProps) {
               {ended.receivers.length} receiver{ended.receivers.length === 1 ? '' : 's'}, {ended.alerts.length} alarm
               {ended.alerts.length === 1 ? '' : 's'}. The record is kept on this phone.
             </p>
+            <div class="action-row">
+              <button type="button" class="action action-quiet" onClick={() => openRun(ended.id, 'fractions')}>Fractions</button>
+              <button type="button" class="action action-quiet" onClick={() => openRun(ended.id, 'report')}>Report</button>
+            </div>
             <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
               Start another demo run
             </button>
@@ -216,6 +229,7 @@ export function App({ services, updates }: AppProps) {
 
       <nav class="tab-bar" aria-label="Screens">
         <button type="button" aria-current={screen === 'watch' ? 'page' : undefined} onClick={() => setScreen('watch')}>Watch</button>
+        <button type="button" aria-current={screen === 'runs' ? 'page' : undefined} onClick={() => { setRunView(null); setScreen('runs'); }}>Runs</button>
         <button type="button" aria-current={screen === 'settings' ? 'page' : undefined} onClick={() => setScreen('settings')}>Settings</button>
       </nav>
     </div>

@@ -16,3 +16,4 @@ export { resolveCharge } from './resolveCharge.ts';
 export { runTimeline } from './runTimeline.ts';
 export type { TimelineEntry } from './runTimeline.ts';
 export { reportText, clockTime, compositionWords } from './reportText.ts';
+export { volumeCurve } from './volumeCurve.ts';
