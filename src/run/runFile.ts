@@ -9,9 +9,14 @@ export class RunFileError extends Error {
   }
 }
 
-/** The whole run as the versioned JSON document (DESIGN.md), indented for a person to read. */
+/**
+ * The whole run as the versioned JSON document (DESIGN.md), indented for a person to read.
+ * Readings go last, whatever order the record's keys were built in, so the same run always
+ * gives the same text.
+ */
 export function runRecordToJson(run: RunRecord): string {
-  return `${JSON.stringify(run, null, 1)}\n`;
+  const { readings, ...rest } = run;
+  return `${JSON.stringify({ ...rest, readings }, null, 1)}\n`;
 }
 
 type Json = Record<string, unknown>;

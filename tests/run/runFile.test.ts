@@ -77,3 +77,13 @@ describe('runTraceCsv', () => {
     expect(Number.isNaN(back.headC[1]!)).toBe(true);
   });
 });
+
+describe('runRecordToJson', () => {
+  it('runRecordToJson writes the readings last, so key order does not change the text', () => {
+    const run = sampleRun();
+    const { fractions, ...withoutFractions } = run;
+    const reordered = { ...withoutFractions, fractions } as RunRecord;
+    expect(runRecordToJson(reordered)).toBe(runRecordToJson(run));
+    expect(runRecordToJson(run).trimEnd().endsWith('}\n}')).toBe(true);
+  });
+});

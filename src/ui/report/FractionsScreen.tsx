@@ -23,9 +23,9 @@ function CompositionLine({ label, names, composition }: { label: string; names: 
   );
 }
 
-function UnitChoice({ value, name, onChange }: { value: 'mL' | 'g'; name: string; onChange(unit: 'mL' | 'g'): void }) {
+function UnitChoice({ value, name, label, onChange }: { value: 'mL' | 'g'; name: string; label: string; onChange(unit: 'mL' | 'g'): void }) {
   return (
-    <span class="unit-choice" role="radiogroup" aria-label={`${name} unit`}>
+    <span class="unit-choice" role="radiogroup" aria-label={label}>
       {(['mL', 'g'] as const).map((u) => (
         <label key={u}>
           <input type="radio" name={name} checked={value === u} onChange={() => onChange(u)} />
@@ -89,7 +89,7 @@ export function FractionsScreen({ run, onSave, onAddNote, onOpenReport, onBack }
               <span>Amount collected</span>
               <input inputMode="decimal" autocomplete="off" aria-label={`Receiver ${row.receiver} amount`} value={f.amount}
                 onInput={(e) => setReceiver(row.receiver, { amount: e.currentTarget.value })} />
-              <UnitChoice value={f.unit} name={`${id}-unit`} onChange={(unit) => setReceiver(row.receiver, { unit })} />
+              <UnitChoice value={f.unit} name={`${id}-unit`} label={`Unit of receiver ${row.receiver}`} onChange={(unit) => setReceiver(row.receiver, { unit })} />
             </label>
             <label class="big-field">
               <span>Analysis</span>
@@ -135,10 +135,10 @@ export function FractionsScreen({ run, onSave, onAddNote, onOpenReport, onBack }
         <h3>Pot and column</h3>
         <label class="big-field"><span>Residue left in the pot</span>
           <input inputMode="decimal" aria-label="Residue" value={fields.residue} onInput={(e) => setFields({ ...fields, residue: e.currentTarget.value })} />
-          <UnitChoice value={fields.residueUnit} name="residue-unit" onChange={(residueUnit) => setFields({ ...fields, residueUnit })} /></label>
+          <UnitChoice value={fields.residueUnit} name="residue-unit" label="Unit of the residue" onChange={(residueUnit) => setFields({ ...fields, residueUnit })} /></label>
         <label class="big-field"><span>Known losses (hold-up, spills)</span>
           <input inputMode="decimal" aria-label="Losses" value={fields.losses} onInput={(e) => setFields({ ...fields, losses: e.currentTarget.value })} />
-          <UnitChoice value={fields.lossesUnit} name="losses-unit" onChange={(lossesUnit) => setFields({ ...fields, lossesUnit })} /></label>
+          <UnitChoice value={fields.lossesUnit} name="losses-unit" label="Unit of the losses" onChange={(lossesUnit) => setFields({ ...fields, lossesUnit })} /></label>
         <label class="big-field"><span>Packed height of the column, cm</span>
           <input inputMode="decimal" aria-label="Packed height" value={fields.heightCm} onInput={(e) => setFields({ ...fields, heightCm: e.currentTarget.value })} /></label>
       </fieldset>
