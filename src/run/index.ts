@@ -9,3 +9,13 @@ export type { Alarm, AlarmBookOptions, AlarmBookState, AlarmKind } from './alarm
 export { downsampleMinMax } from './downsample.ts';
 export { toRunPlan } from './runPlan.ts';
 export type { RunPlan, RunWindow } from './runPlan.ts';
+export { emptyFractions } from './fractionEntry.ts';
+export type { FractionAmount, FractionAnalysis, FractionEntry, GcAreaAnalysis, MixingRule, RefractiveIndexAnalysis, RunFractions } from './fractionEntry.ts';
+export { parseTraceCsv, writeTraceCsv, TraceCsvError } from './traceCsv.ts';
+export type { Trace } from './traceCsv.ts';
+export { runTraceCsv } from './runTraceCsv.ts';
+export { runFromTraceCsv } from './traceImport.ts';
+export type { TraceImport } from './traceImport.ts';
+export { parseRunRecordJson, runRecordToJson, RunFileError } from './runFile.ts';
+export { duplicatePlan } from './duplicatePlan.ts';
+export type { RunDraft } from './duplicatePlan.ts';

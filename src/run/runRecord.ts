@@ -3,6 +3,8 @@
  * (`time_s`, `head_c`), a null head meaning no valid reading at that time. Times inside a run
  * are seconds since heat on; wall-clock times are ISO 8601 strings supplied by the caller.
  */
+import type { RunFractions } from './fractionEntry.ts';
+
 export const runRecordFormat = 'cutbell-run';
 export const runRecordVersion = 1;
 
@@ -76,6 +78,11 @@ export interface RunRecord {
   heat_changes: TimedNote[];
   notes: TimedNote[];
   gaps: ReadingGap[];
+  /**
+   * Amounts and analyses of the receivers, entered after the run. Absent until the chemist
+   * enters something (records written before this field existed read the same way).
+   */
+  fractions?: RunFractions;
 }
 
 /** A run record without its readings: what the journal keeps in its small manifest. */

@@ -7,3 +7,5 @@ export { checkStorage } from './storageHealth.ts';
 export type { StorageHealth, StorageLike } from './storageHealth.ts';
 export { defaultSettings, loadSettings, saveSettings, pressureUnitSettings } from './settings.ts';
 export type { Settings, TemperatureUnitSetting, PressureUnitSetting, DecimalSeparatorSetting } from './settings.ts';
+export { listSavedRuns, loadRunRecord, saveFinishedRun, editFinishedRun, removeRun, restoreRun, RunIdTakenError } from './savedRuns.ts';
+export type { ImportOutcome, RemovedRun, SavedRunSummary } from './savedRuns.ts';

@@ -1,5 +1,6 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
-import { toRunPlan, type RunHeader } from '../run/index.ts';
+import { toRunPlan, type RunHeader, type RunPlan } from '../run/index.ts';
+import { findCompound, type Compound } from '../science/index.ts';
 import { createDemoStill, demoCutPlan, demoMixture, type DemoStillSnapshot } from '../science/demo/index.ts';
 import { SimulatedSource } from '../sensor/simulated/simulatedSource.ts';
 import { RunSession, type LiveSource } from '../session/index.ts';
@@ -10,7 +11,7 @@ import { LabTab } from './lab/LabTab.tsx';
 import { PreHeatChecklist } from './prepare/PreHeatChecklist.tsx';
 // Prepare (issue 8): loaded on first visit; a prepared run starts through the checklist.
 import { LazyPrepareScreen } from './prepare/LazyPrepareScreen.tsx';
-import type { PreparedRun } from './prepare/preparedRun.ts';
+import { extraChecksFor, type PreparedRun } from './prepare/preparedRun.ts';
 import type { AppServices } from './services.ts';
 import type { SensorSetup } from '../sensor/sensorSetup.ts';
 import type { ConnectedSensor } from './sensor/connectedSensor.ts';
@@ -19,18 +20,33 @@ import { SensorPanel } from './sensor/SensorPanel.tsx';
 import { resumeSensorRun, sensorLiveSource } from './sensor/sensorRun.ts';
 import { SettingsScreen } from './settings/SettingsScreen.tsx';
 import { RunSyncLine } from './sync/RunSyncLine.tsx';
+import { useSyncStates } from './sync/useSyncStates.ts';
 import type { UpdateService } from './update/pwaUpdate.ts';
 import { UpdateNotice } from './update/UpdateNotice.tsx';
 import { useSessionVersion } from './useSession.ts';
 import { formatElapsed } from './watch/format.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
+// Runs, Fractions, Report (loaded on demand).
+import { LazyRunsArea } from './runs/LazyRunsArea.tsx';
+import type { RunView } from './runs/RunsArea.tsx';
 
-type Screen = 'watch' | 'prepare' | 'settings' | 'lab';
+type Screen = 'watch' | 'prepare' | 'settings' | 'lab' | 'runs';
 type Stage = 'loading' | 'idle' | 'connect' | 'checklist' | 'running' | 'ended';
 
 interface AppProps {
   services: AppServices;
   updates?: UpdateService;
+}
+
+/** The library's compounds for the names in a charge; names it does not know are skipped. */
+function knownCompounds(names: string[]): Compound[] {
+  return names.flatMap((name) => {
+    try {
+      return [findCompound(name)];
+    } catch {
+      return [];
+    }
+  });
 }
 
 function applySettings(services: AppServices, settings: Settings): void {
@@ -55,7 +71,13 @@ export function App({ services, updates }: AppProps) {
   // Sensor (src/ui/sensor): the connected sensor before heat on; a reopened run's sensor awaiting a tap.
   const [sensor, setSensor] = useState<ConnectedSensor | null>(null);
   const [restoredSensor, setRestoredSensor] = useState<SensorSetup | null>(null);
+  const [runView, setRunView] = useState<RunView>(null);
+  const openRun = (runId: string, view: 'fractions' | 'report') => {
+    setRunView({ runId, view });
+    setScreen('runs');
+  };
   useSessionVersion(session);
+  const syncStateOf = useSyncStates(services.outbox);
 
   // `#demo-interval=0.1` in the address gives the demo 10 readings a second (bench/watch-soak).
   const demoIntervalS = Number(new URLSearchParams(location.hash.slice(1)).get('demo-interval')) || 1;
@@ -219,6 +241,27 @@ export function App({ services, updates }: AppProps) {
           />
         )}
         {screen === 'lab' && <LabTab settings={settings} />}
+        {screen === 'runs' && (
+          <LazyRunsArea
+            store={services.store}
+            open={runView}
+            onOpenChange={setRunView}
+            syncStateOf={syncStateOf}
+            onDuplicatePlan={(draft) => {
+              setPrepared({
+                title: draft.title,
+                plan: draft.plan as RunPlan,
+                charge: draft.charge,
+                pressurePa: draft.pressurePa ?? 101_325,
+                column: { description: draft.column?.description ?? 'as before', theoretical_plates: draft.column?.theoretical_plates ?? 0 },
+                heat: '',
+                extraChecks: extraChecksFor(knownCompounds(draft.charge.map((c) => c.name)), null, (tC) => `${tC.toFixed(0)} °C`),
+              });
+              setScreen('watch');
+              setStage('idle');
+            }}
+          />
+        )}
         {screen === 'settings' && <SettingsScreen settings={settings} services={services} onChange={changeSettings} />}
         {screen === 'watch' && stage === 'loading' && <p class="notice">Opening…</p>}
         {screen === 'watch' && stage === 'idle' && (
@@ -309,6 +352,10 @@ export function App({ services, updates }: AppProps) {
               {ended.alerts.length === 1 ? '' : 's'}. The record is kept on this phone.
             </p>
             <RunSyncLine outbox={services.outbox} runId={ended.id} />
+            <div class="action-row">
+              <button type="button" class="action action-quiet" onClick={() => openRun(ended.id, 'fractions')}>Fractions</button>
+              <button type="button" class="action action-quiet" onClick={() => openRun(ended.id, 'report')}>Report</button>
+            </div>
             <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
               Start another demo run
             </button>
@@ -334,6 +381,7 @@ export function App({ services, updates }: AppProps) {
       <nav class="tab-bar" aria-label="Screens">
         <button type="button" aria-current={screen === 'prepare' ? 'page' : undefined} onClick={() => setScreen('prepare')}>Prepare</button>
         <button type="button" aria-current={screen === 'watch' ? 'page' : undefined} onClick={() => setScreen('watch')}>Watch</button>
+        <button type="button" aria-current={screen === 'runs' ? 'page' : undefined} onClick={() => { setRunView(null); setScreen('runs'); }}>Runs</button>
         <button type="button" aria-current={screen === 'lab' ? 'page' : undefined} onClick={() => setScreen('lab')}>Lab</button>
         <button type="button" aria-current={screen === 'settings' ? 'page' : undefined} onClick={() => setScreen('settings')}>Settings</button>
       </nav>

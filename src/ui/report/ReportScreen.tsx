@@ -1,0 +1,142 @@
+import { useMemo, useState } from 'preact/hooks';
+import { ReadingBuffer, runRecordToJson, runTraceCsv, type RunRecord } from '../../run/index.ts';
+import { buildRunReport, clockTime, plateMethod, reportText, runTimeline, volumeCurve } from '../../run/report/index.ts';
+import { TraceChart } from '../chart/TraceChart.tsx';
+import { runFileName, type FileActions } from './fileActions.ts';
+import { VolumeChart } from './VolumeChart.tsx';
+import './report.css';
+
+interface ReportScreenProps {
+  run: RunRecord;
+  files: FileActions;
+  onOpenFractions(): void;
+  onBack(): void;
+}
+
+const pct = (f: number | null | undefined) => (f == null || !Number.isFinite(f) ? '—' : `${(100 * f).toFixed(1)} %`);
+const g = (kg: number | null | undefined) => (kg == null || !Number.isFinite(kg) ? '—' : `${(kg * 1000).toFixed(2)} g`);
+const ml = (m3: number | null | undefined) => (m3 == null || !Number.isFinite(m3) ? '—' : `${(m3 * 1e6).toFixed(1)} mL`);
+const c1 = (c: number | null) => (c == null || !Number.isFinite(c) ? '—' : `${c.toFixed(1)} °C`);
+
+/** The run written up for a lab notebook: printable, shareable, exportable. */
+export function ReportScreen({ run, files, onOpenFractions, onBack }: ReportScreenProps) {
+  const report = useMemo(() => buildRunReport(run), [run]);
+  const text = useMemo(() => reportText(run, report), [run, report]);
+  const timeline = useMemo(() => runTimeline(run), [run]);
+  const buffer = useMemo(() => {
+    const b = new ReadingBuffer(Math.max(1, run.readings.time_s.length));
+    run.readings.time_s.forEach((t, i) => b.append(t, run.readings.head_c[i] ?? NaN));
+    return b;
+  }, [run]);
+  const curve = useMemo(() => volumeCurve(run, report.rows), [run, report]);
+  const [status, setStatus] = useState<string | null>(null);
+  const names = report.components;
+  const markers = run.receivers.filter((r) => r.time_s > 0).map((r) => ({ timeS: r.time_s, label: `receiver ${r.receiver}` }));
+  const windows = (run.plan as { windows?: { fromC: number; toC: number; receiver: number }[] } | null)?.windows ?? [];
+  const bands = windows.filter((w) => Number.isFinite(w.fromC) && Number.isFinite(w.toC)).map((w) => ({ fromC: w.fromC, toC: w.toC, label: `receiver ${w.receiver}` }));
+  const json = () => runRecordToJson(run);
+
+  const share = async () => {
+    const ok = await files.share({ title: run.title, text, file: { name: runFileName(run.title, run.started_at, 'json'), type: 'application/json', text: json() } });
+    setStatus(ok ? 'Shared.' : 'Not shared.');
+  };
+  const copy = async () => {
+    setStatus((await files.copyText(text)) ? 'Report copied as text.' : 'Copying is not allowed here: use Share or Print.');
+  };
+
+  return (
+    <article class="report" aria-labelledby="report-title">
+      <h1 class="screen-title no-print">Report</h1>
+      <h2 id="report-title">{run.title}</h2>
+      <p class="report-meta">
+        Run {run.id} · started {run.started_at.replace('T', ' ').slice(0, 16)} UTC{run.ended_at ? ` · ended ${run.ended_at.replace('T', ' ').slice(0, 16)} UTC` : ''} · {run.source.label}
+      </p>
+      <dl class="report-facts">
+        <div><dt>Charge</dt><dd>{run.charge.map((c) => `${c.name} ${c.amount} ${c.unit}`).join(', ') || 'not recorded'}</dd></div>
+        <div><dt>Pressure</dt><dd>{(report.pressurePa / 1000).toFixed(2)} kPa{run.pressure_pa == null ? ' (assumed)' : ''}</dd></div>
+        <div><dt>Column</dt><dd>{run.column ? `${run.column.description}${run.column.theoretical_plates != null ? `, ${run.column.theoretical_plates} plates planned` : ''}` : 'not recorded'}</dd></div>
+        <div><dt>Heat</dt><dd>{run.heat_changes.length === 0 ? 'no changes recorded' : run.heat_changes.map((h) => `${clockTime(h.time_s)} ${h.text}`).join('; ')}</dd></div>
+      </dl>
+      {report.problems.map((p) => <p key={p} class="notice">{p}</p>)}
+
+      <section class="report-plots">
+        <TraceChart readings={buffer} version={buffer.length} bands={bands} markers={markers} height={180} label="Trace with receiver changes (minutes since heat on)" minRedrawMs={0} />
+        {curve.volumeMl.length > 0 && (
+          <figure class="trace"><figcaption>Head temperature against distilled volume</figcaption><VolumeChart volumeMl={curve.volumeMl} headC={curve.headC} height={180} /></figure>
+        )}
+      </section>
+
+      <h3>Fractions</h3>
+      <div class="table-scroll">
+        <table class="fraction-table" data-testid="fraction-table">
+          <thead><tr><th>Receiver</th><th>Head range</th><th>Times</th><th>Amount</th><th>Composition (mass)</th><th>Purity</th></tr></thead>
+          <tbody>
+            {report.rows.map((r) => (
+              <tr key={r.receiver}>
+                <td>{r.receiver}</td>
+                <td>{c1(r.minHeadC)}–{c1(r.maxHeadC)}</td>
+                <td>{clockTime(r.fromS)}–{clockTime(r.toS)}</td>
+                <td>{ml(r.volumeM3)}<br />{g(r.massKg)}</td>
+                <td>
+                  {r.measured ? names.map((n, i) => `${n} ${pct(r.measured!.mass[i])}`).join(', ') : 'no analysis'}
+                  {r.estimated && <><br /><small>head temp.: {names.map((n, i) => `${n} ${pct(r.estimated!.mass[i])}`).join(', ')}</small></>}
+                </td>
+                <td>{r.mainComponent ? `${pct(r.purityMass)} ${r.mainComponent}` : '—'}{r.purityBasis === 'head temperature' && <small> (est.)</small>}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p class="method-note">{report.estimateMethod} Analyses: {[...new Set(report.rows.flatMap((r) => (r.measuredBy ? [r.measuredBy.replace(/^n_D [\d.]+ at [\d.]+ °C, [\d.]+ at 20 °C /, 'n_D corrected to 20 °C ')] : [])))].join('; ') || 'none entered'}.</p>
+
+      <h3>Recovery</h3>
+      {report.recovery ? (
+        <table class="fraction-table">
+          <thead><tr><th>Component</th><th>Charged</th><th>In fractions</th><th>Recovery</th><th>In its own cuts</th></tr></thead>
+          <tbody>{report.recovery.map((c) => (
+            <tr key={c.name}><td>{c.name}</td><td>{g(c.chargedKg)}</td><td>{g(c.recoveredKg)}</td><td>{pct(c.recovery)}</td><td>{pct(c.ownCutsRecovery)}</td></tr>
+          ))}</tbody>
+        </table>
+      ) : <p>Enter the amounts of every receiver to see the recovery.</p>}
+      {report.isRecoveryEstimated && <p class="method-note">Some compositions come from the head temperature, not an analysis.</p>}
+
+      <h3>Mass balance</h3>
+      {report.balance ? (
+        <p data-testid="mass-balance">
+          Charged {g(report.balance.chargedKg)} = fractions {g(report.balance.fractionsKg)} + residue {g(report.balance.residueKg)} + losses {g(report.balance.lossesKg)} + unaccounted{' '}
+          <strong>{g(report.balance.unaccountedKg)} ({pct(report.balance.unaccountedFraction)})</strong>
+        </p>
+      ) : <p>The charge must be known by amount for a mass balance.</p>}
+
+      <h3>Column</h3>
+      {'reason' in report.plates ? <p>Plates not estimated: {report.plates.reason}.</p> : (
+        <p data-testid="plates">
+          {report.plates.plates.toFixed(1)} theoretical plates ({report.plates.stages.toFixed(1)} stages with the pot), from receiver {report.plates.receiver}: x<sub>D</sub> {report.plates.distillateLight.toFixed(3)},
+          x<sub>W</sub> {report.plates.potLight.toFixed(3)}, α {report.plates.alpha.toFixed(2)}{report.plates.hetpM !== null ? `; HETP ${(report.plates.hetpM * 100).toFixed(1)} cm` : ''}.
+        </p>
+      )}
+      <p class="method-note">{plateMethod}</p>
+
+      <h3>Timeline</h3>
+      <ol class="timeline">
+        {timeline.map((e, i) => (
+          <li key={i} data-kind={e.kind}><span class="timeline-time">{clockTime(e.timeS)}</span> {e.kind}: {e.text}{e.headC != null ? ` at ${c1(e.headC)}` : ''}</li>
+        ))}
+      </ol>
+      {run.notes.length > 0 && <><h3>Notes</h3><ul>{run.notes.map((n, i) => <li key={i}>{clockTime(n.time_s)}: {n.text}</li>)}</ul></>}
+
+      {status && <p class="notice no-print" role="status">{status}</p>}
+      <div class="report-actions no-print">
+        <button type="button" class="action action-start" onClick={() => files.print()}>Print or save as PDF</button>
+        <div class="action-row">
+          {files.canShare && <button type="button" class="action action-quiet" onClick={() => void share()}>Share</button>}
+          <button type="button" class="action action-quiet" onClick={() => void copy()}>Copy as text</button>
+          <button type="button" class="action action-quiet" onClick={() => files.download(runFileName(run.title, run.started_at, 'json'), 'application/json', json())}>Export run (JSON)</button>
+          <button type="button" class="action action-quiet" onClick={() => files.download(runFileName(run.title, run.started_at, 'csv'), 'text/csv', runTraceCsv(run))}>Export trace (CSV)</button>
+          <button type="button" class="action action-quiet" onClick={onOpenFractions}>Fractions</button>
+          <button type="button" class="action action-quiet" onClick={onBack}>All runs</button>
+        </div>
+      </div>
+    </article>
+  );
+}
