@@ -26,9 +26,11 @@ export interface SessionTimings {
   tickMs: number;
   /** Snooze length. Units: ms */
   snoozeMs: number;
+  /** Repeat of an unacknowledged alarm. Units: ms */
+  alarmRepeatMs: number;
 }
 
-export const defaultTimings: SessionTimings = { flushMs: 1000, sensorSilenceMs: 5000, tickMs: 250, snoozeMs: 3 * 60_000 };
+export const defaultTimings: SessionTimings = { flushMs: 1000, sensorSilenceMs: 5000, tickMs: 250, snoozeMs: 3 * 60_000, alarmRepeatMs: 30_000 };
 
 /**
  * The live run: readings from a source go into the chart buffer, the journal and the watcher;
@@ -72,7 +74,7 @@ export class RunSession {
   static async start(deps: SessionDeps, run: Omit<NewRun, 'startedAt'>, source: LiveSource, timings = defaultTimings): Promise<RunSession> {
     const header = createRunHeader({ ...run, startedAt: new Date(deps.wallMs()).toISOString() });
     const journal = await RunJournal.start(deps.store, header, deps.wallMs());
-    const session = new RunSession(deps, timings, header, journal, deps.createWatcher(header.plan), new AlarmBook({ repeatMs: 30_000 }));
+    const session = new RunSession(deps, timings, header, journal, deps.createWatcher(header.plan), new AlarmBook({ repeatMs: timings.alarmRepeatMs }));
     session.#attach(source);
     await deps.wakeLock?.keepOn();
     return session;
@@ -92,7 +94,7 @@ export class RunSession {
     const { journal, manifest, timeS, headC } = restored;
     const live = manifest.liveState as { detector?: unknown; alarms?: AlarmBookState; source?: unknown };
     const watcher = deps.createWatcher(manifest.header.plan, live.detector);
-    const alarms = new AlarmBook({ repeatMs: 30_000 }, live.alarms);
+    const alarms = new AlarmBook({ repeatMs: timings.alarmRepeatMs }, live.alarms);
     const session = new RunSession(deps, timings, manifest.header, journal, watcher, alarms);
     for (let i = 0; i < timeS.length; i++) session.readings.append(timeS[i]!, headC[i]!);
     session.resumedAfterGap = true;

@@ -15,6 +15,10 @@ export interface Settings {
   vibration: boolean;
   /** Simulated seconds per real second for the demo source. */
   demoSpeed: number;
+  /** An unacknowledged alarm is announced again after this long. Units: s */
+  alarmRepeatS: number;
+  /** How long Snooze silences an alarm. Units: min */
+  snoozeMin: number;
   temperatureUnit: TemperatureUnitSetting;
   pressureUnit: PressureUnitSetting;
   decimalSeparator: DecimalSeparatorSetting;
@@ -29,6 +33,8 @@ export const defaultSettings: Settings = {
   sound: true,
   vibration: true,
   demoSpeed: 30,
+  alarmRepeatS: 30,
+  snoozeMin: 3,
   temperatureUnit: 'degC',
   pressureUnit: 'kPa',
   decimalSeparator: 'auto',
@@ -37,6 +43,10 @@ export const defaultSettings: Settings = {
 };
 
 const settingsKey = ['settings'];
+
+function within(value: number, min: number, max: number, fallback: number): number {
+  return value >= min && value <= max ? value : fallback;
+}
 
 function oneOf<T extends string>(value: unknown, allowed: readonly T[], fallback: T): T {
   return typeof value === 'string' && (allowed as readonly string[]).includes(value) ? (value as T) : fallback;
@@ -58,6 +68,8 @@ export async function loadSettings(store: KeyValueStore): Promise<Settings> {
     sound: pick('sound'),
     vibration: pick('vibration'),
     demoSpeed: demoSpeed > 0 ? demoSpeed : defaultSettings.demoSpeed,
+    alarmRepeatS: within(pick('alarmRepeatS'), 10, 300, defaultSettings.alarmRepeatS),
+    snoozeMin: within(pick('snoozeMin'), 1, 15, defaultSettings.snoozeMin),
     temperatureUnit: oneOf(saved?.temperatureUnit, ['degC', 'degF'], defaultSettings.temperatureUnit),
     pressureUnit: oneOf(saved?.pressureUnit, pressureUnitSettings, defaultSettings.pressureUnit),
     decimalSeparator: oneOf(saved?.decimalSeparator, ['auto', '.', ','], defaultSettings.decimalSeparator),

@@ -3,7 +3,7 @@ import { toRunPlan, type RunHeader, type RunPlan } from '../run/index.ts';
 import { findCompound, type Compound } from '../science/index.ts';
 import { createDemoStill, demoCutPlan, demoMixture, type DemoStillSnapshot } from '../science/demo/index.ts';
 import { SimulatedSource } from '../sensor/simulated/simulatedSource.ts';
-import { RunSession, type LiveSource } from '../session/index.ts';
+import { RunSession, defaultTimings, type LiveSource, type SessionTimings } from '../session/index.ts';
 import { defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
 import { queueEndedRuns, readSyncLink, startSyncTriggers } from '../sync/index.ts';
 import { AlarmBanner } from './alarm/AlarmBanner.tsx';
@@ -47,6 +47,11 @@ function knownCompounds(names: string[]): Compound[] {
       return [];
     }
   });
+}
+
+/** The chemist's alarm repeat and snooze settings as the live run's timings. */
+function timingsFor(settings: Settings): SessionTimings {
+  return { ...defaultTimings, alarmRepeatMs: settings.alarmRepeatS * 1000, snoozeMs: settings.snoozeMin * 60_000 };
 }
 
 function applySettings(services: AppServices, settings: Settings): void {
@@ -104,7 +109,7 @@ export function App({ services, updates }: AppProps) {
         const restored = await RunSession.restore(services.sessionDeps, (header, saved) => {
           savedSource = saved;
           return header.source.kind === 'simulated' ? makeDemoSource(loaded.demoSpeed, saved as DemoStillSnapshot | undefined) : null;
-        });
+        }, timingsFor(loaded));
         if (isCancelled) return;
         if (restored) {
           setSession(restored);
@@ -196,6 +201,7 @@ export function App({ services, updates }: AppProps) {
         services.sessionDeps,
         { id: `run-${Date.now().toString(36)}`, device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser', source: sourceInfo, ...what },
         source,
+        timingsFor(settings),
       );
       setSensor(null);
       setRestoredSensor(null);
@@ -374,6 +380,7 @@ export function App({ services, updates }: AppProps) {
               : undefined
           }
           onAcknowledge={() => session?.acknowledge(alarm.id)}
+          snoozeMin={settings.snoozeMin}
           onSnooze={() => session?.snooze(alarm.id)}
         />
       )}

@@ -208,3 +208,22 @@ describe('RunSession', () => {
     expect(await RunSession.restore(h.deps, () => null)).toBeNull();
   });
 });
+
+describe('RunSession timings', () => {
+  it('repeats an unacknowledged alarm at the interval the chemist set', async () => {
+    const h = harness(new Map([[1, { time_s: 1, event: 'breakthrough', head_c: 80 }]]));
+    const source = new ManualSource();
+    await RunSession.start(h.deps, run, source, { ...defaultTimings, alarmRepeatMs: 60_000 });
+    source.send([1, 80]);
+    for (let s = 2; s <= 50; s++) {
+      source.send([s, 80]);
+      await h.advance(1000);
+    }
+    expect(h.alarmsSpoken).toHaveLength(1);
+    for (let s = 51; s <= 70; s++) {
+      source.send([s, 80]);
+      await h.advance(1000);
+    }
+    expect(h.alarmsSpoken).toHaveLength(2);
+  });
+});

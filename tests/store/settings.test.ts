@@ -9,7 +9,7 @@ describe('settings', () => {
   it('saveSettings then loadSettings round-trips', async () => {
     const store = new MemoryStore();
     const chosen: Settings = {
-      speech: false, sound: true, vibration: false, demoSpeed: 120, temperatureUnit: 'degF', pressureUnit: 'mmHg', decimalSeparator: ',',
+      speech: false, sound: true, vibration: false, demoSpeed: 120, alarmRepeatS: 60, snoozeMin: 5, temperatureUnit: 'degF', pressureUnit: 'mmHg', decimalSeparator: ',',
       syncServer: 'https://lab.example:8443/', syncToken: 'cb1.abc',
     };
     await saveSettings(store, chosen);
@@ -18,7 +18,7 @@ describe('settings', () => {
 
   it('loadSettings replaces malformed values with defaults and keeps the good ones', async () => {
     const store = new MemoryStore();
-    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3, temperatureUnit: 'K', pressureUnit: 'mmhg', decimalSeparator: ';', syncToken: 42 }]]);
+    await store.setMany([[['settings'], { speech: 'yes', sound: false, demoSpeed: -3, temperatureUnit: 'K', pressureUnit: 'mmhg', decimalSeparator: ';', syncToken: 42, alarmRepeatS: 2, snoozeMin: Number.NaN }]]);
     expect(await loadSettings(store)).toEqual({ ...defaultSettings, sound: false });
   });
 

@@ -5,6 +5,8 @@ interface AlarmBannerProps {
   /** More alarms waiting behind this one. */
   waiting: number;
   isSnoozed: boolean;
+  /** Snooze length, as set in Settings. Units: min */
+  snoozeMin: number;
   /** The action itself, when one tap can do it (recording the receiver change). */
   primary?: { label: string; run(): void };
   onAcknowledge(): void;
@@ -22,7 +24,7 @@ const kindTitle: Record<Alarm['kind'], string> = {
  * A standing alarm fills the screen: a symbol and words as well as colour, the action in large
  * type, one large acknowledge target reachable with a gloved thumb, and a snooze.
  */
-export function AlarmBanner({ alarm, waiting, isSnoozed, primary, onAcknowledge, onSnooze }: AlarmBannerProps) {
+export function AlarmBanner({ alarm, waiting, isSnoozed, snoozeMin, primary, onAcknowledge, onSnooze }: AlarmBannerProps) {
   if (isSnoozed) {
     return (
       <div class="alarm-strip" role="status" data-kind={alarm.kind}>
@@ -50,7 +52,7 @@ export function AlarmBanner({ alarm, waiting, isSnoozed, primary, onAcknowledge,
       ) : (
         <button type="button" class="alarm-ack" onClick={onAcknowledge}>Acknowledge</button>
       )}
-      <button type="button" class="alarm-snooze" onClick={onSnooze}>Snooze 3 min</button>
+      <button type="button" class="alarm-snooze" onClick={onSnooze}>Snooze {snoozeMin} min</button>
     </div>
   );
 }

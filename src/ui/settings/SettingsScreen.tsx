@@ -23,6 +23,19 @@ export function SettingsScreen({ settings, services, onChange }: SettingsScreenP
       <h1 id="settings-title" class="screen-title">Settings</h1>
 
       <h2>Alarms</h2>
+      <label class="field-row">
+        <span>Repeat an alarm until acknowledged, every</span>
+        <select value={String(settings.alarmRepeatS)} onChange={(e) => onChange({ ...settings, alarmRepeatS: Number(e.currentTarget.value) })}>
+          {[15, 30, 60, 120].map((s) => <option key={s} value={String(s)}>{s} s</option>)}
+        </select>
+      </label>
+      <label class="field-row">
+        <span>Snooze for</span>
+        <select value={String(settings.snoozeMin)} onChange={(e) => onChange({ ...settings, snoozeMin: Number(e.currentTarget.value) })}>
+          {[1, 2, 3, 5, 10].map((m) => <option key={m} value={String(m)}>{m} min</option>)}
+        </select>
+      </label>
+      <p class="hint">A new run uses these; a run already going keeps the ones it started with.</p>
       <label class="switch">
         <input type="checkbox" checked={settings.speech} onChange={() => toggle('speech')} />
         <span>Speak alarms</span>
