@@ -7,3 +7,5 @@ export { checkStorage } from './storageHealth.ts';
 export type { StorageHealth, StorageLike } from './storageHealth.ts';
 export { defaultSettings, loadSettings, saveSettings } from './settings.ts';
 export type { Settings } from './settings.ts';
+export { saveColumnEstimate, loadColumnEstimate, columnEstimateKey } from './columnEstimates.ts';
+export type { ColumnEstimate, PlateEstimateMethod } from './columnEstimates.ts';
