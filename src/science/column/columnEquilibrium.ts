@@ -7,12 +7,14 @@ import type { StageEquilibrium } from './stageEquilibrium.ts';
  * The science core's equilibrium (ideal Raoult or UNIFAC, library vapour pressures) in the shape
  * the column model calls: allocation-free, warm-started from the stage's last answer.
  *
- * The integrator probes nearly exhausted components with mole fractions like -1e-12 (a few -1e-9 seen near exhaustion), which
- * prepareMixture rightly refuses at its public boundary; here they are clamped to 0 and the rest
- * renormalised (anything below -1e-4, or NaN, is an error). The change is of the probe's own size, far below the 1e-8 finite-difference
- * steps of the Jacobian. prepareMixture's bubble point stops at |ln(sum K x)| < 1e-11, a
- * temperature error near 3e-10 K (dlnP/dT is about 0.03-0.04 1/K for organic liquids, Clausius-
- * Clapeyron), i.e. about 1e-12 relative, as the column README asks.
+ * The integrator probes nearly exhausted components with mole fractions like -1e-12 (a few
+ * -1e-9 near exhaustion, and far more in the Newton trial of a step it then rejects), which
+ * prepareMixture rightly refuses at its public boundary; here they are clamped to 0 and the
+ * rest renormalised (NaN is an error). For the small ones the change is of the probe's own
+ * size, far below the 1e-8 finite-difference steps of the Jacobian. prepareMixture's bubble
+ * point stops at |ln(sum K x)| < 1e-11, a temperature error near 3e-10 K (dlnP/dT is about
+ * 0.03-0.04 1/K for organic liquids, Clausius-Clapeyron), about 1e-12 relative, as the column
+ * README asks.
  * Throws MissingUnifacDataError for a pair UNIFAC cannot describe.
  */
 export function columnEquilibrium(compounds: readonly Compound[], model: ThermoModel): StageEquilibrium {
@@ -25,9 +27,10 @@ export function columnEquilibrium(compounds: readonly Compound[], model: ThermoM
       let sum = 0;
       for (let i = 0; i < n; i++) {
         const xi = x[i]!;
-        // Integrator error reaches a few 1e-9 on an exhausted stage; far beyond its tolerance
-        // (or NaN) the caller is wrong, not the integrator: say so.
-        if (!(xi >= -1e-4)) throw new RangeError(`mole fraction of ${compounds[i]!.name} on a stage is ${xi}`);
+        // NaN means the caller is broken. Negative entries are clamped whatever their size: a
+        // Newton trial of a step the integrator will reject can carry -0.2, and throwing there
+        // would end a run the integrator was about to save with a smaller step.
+        if (Number.isNaN(xi)) throw new RangeError(`mole fraction of ${compounds[i]!.name} on a stage is NaN`);
         const value = xi > 0 ? xi : 0;
         clamped[i] = value;
         sum += value;
