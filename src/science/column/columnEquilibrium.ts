@@ -10,7 +10,7 @@ import type { StageEquilibrium } from './stageEquilibrium.ts';
  * The integrator probes nearly exhausted components with mole fractions like -1e-12 (a few
  * -1e-9 near exhaustion, and far more in the Newton trial of a step it then rejects), which
  * prepareMixture rightly refuses at its public boundary; here they are clamped to 0 and the
- * rest renormalised (NaN is an error). For the small ones the change is of the probe's own
+ * rest renormalised (NaN is an error; all entries <= 0 gets a finite answer for a trial). For the small ones the change is of the probe's own
  * size, far below the 1e-8 finite-difference steps of the Jacobian. prepareMixture's bubble
  * point stops at |ln(sum K x)| < 1e-11, a temperature error near 3e-10 K (dlnP/dT is about
  * 0.03-0.04 1/K for organic liquids, Clausius-Clapeyron), about 1e-12 relative, as the column
@@ -35,7 +35,16 @@ export function columnEquilibrium(compounds: readonly Compound[], model: ThermoM
         clamped[i] = value;
         sum += value;
       }
-      if (!(sum > 0)) throw new RangeError('liquid on a stage has no positive mole fraction');
+      if (!(sum > 0)) {
+        // A Newton trial can even make every entry <= 0. Any finite answer will do there (the
+        // step is rejected); magnitudes, or equal parts, keep it finite and deterministic.
+        for (let i = 0; i < n; i++) clamped[i] = Math.abs(x[i]!);
+        sum = clamped.reduce((a, b) => a + b, 0);
+        if (!(sum > 0)) {
+          clamped.fill(1);
+          sum = n;
+        }
+      }
       for (let i = 0; i < n; i++) clamped[i] = clamped[i]! / sum;
       return mixture.bubbleTInto(clamped, pPa, yOut, guessK > 0 ? guessK : undefined);
     },
