@@ -2,27 +2,33 @@
 // column simulator (physical) and the synthetic profiles (a second, shape-driven corpus); and
 // the watcher's throughput.
 // Run: npx tsx bench/detector.bench.ts [runs] [seed] [--quick] [--verbose] [--only simulated|synthetic]
+//      [--options '{"flatSlopeCPerS": 0.01}']
 // The simulated corpus's truth is cached under .bench/ (first build takes a few minutes).
 import { performance } from 'node:perf_hooks';
 import { sensorReadings } from '../src/science/sensorModel/index.ts';
-import { analyzeReadings } from '../src/signal/index.ts';
+import { analyzeReadings, type WatcherOptions } from '../src/signal/index.ts';
 import { scoreRun, summariseScores, truthWindows, type RunScore, type ScoredEvent, type ScoreSummary } from '../src/signal/scoring/index.ts';
 import { syntheticTruth } from '../tests/support/syntheticTruth.ts';
 import { makeCorpus, syntheticTruthSource, type CorpusRun, type TruthSource } from './corpus.ts';
 import { fixedAlarmPeer, slopePeer } from './peers.ts';
 import { simulatedTruthSource } from './simulatedTruth.ts';
 
-const positional = process.argv.slice(2).filter((a) => !a.startsWith('--'));
+const args = process.argv.slice(2);
+const positional = args.filter((a, i) => !a.startsWith('--') && args[i - 1] !== '--only' && args[i - 1] !== '--options');
 const quick = process.argv.includes('--quick');
 const count = Number(positional[0] ?? (quick ? 60 : 240));
 const seed = Number(positional[1] ?? 20251201);
 const verbose = process.argv.includes('--verbose');
-const onlyIndex = process.argv.indexOf('--only');
-const only = onlyIndex > 0 ? process.argv[onlyIndex + 1] : undefined;
+const onlyIndex = args.indexOf('--only');
+const only = onlyIndex >= 0 ? args[onlyIndex + 1] : undefined;
+
+// --options '{"plateauHoldS": 30}' overrides watcher defaults, for tuning sweeps.
+const optionsIndex = args.indexOf('--options');
+const overrides = optionsIndex >= 0 ? (JSON.parse(args[optionsIndex + 1] ?? '{}') as Partial<WatcherOptions>) : {};
 
 type Detector = { name: string; run: (r: CorpusRun) => ScoredEvent[] };
 const detectors: Detector[] = [
-  { name: 'run watcher', run: (r) => analyzeReadings(r.timeS, r.headC) },
+  { name: 'run watcher', run: (r) => analyzeReadings(r.timeS, r.headC, [], overrides) },
   { name: 'fixed bp+3', run: (r) => fixedAlarmPeer(r.timeS, r.headC, r.boilingPointsC) },
   { name: 'MA slope', run: (r) => slopePeer(r.timeS, r.headC) },
 ];
