@@ -1,48 +1,74 @@
-// The run watcher against two naive peers on a seeded corpus with ground truth, and its
-// throughput. Run: npx tsx bench/detector.bench.ts [runs] [seed]
+// The run watcher against two naive peers on two seeded corpora with ground truth: runs of the
+// column simulator (physical) and the synthetic profiles (a second, shape-driven corpus); and
+// the watcher's throughput.
+// Run: npx tsx bench/detector.bench.ts [runs] [seed] [--quick] [--verbose] [--only simulated|synthetic]
+//      [--options '{"flatSlopeCPerS": 0.01}']
+// The simulated corpus's truth is cached under .bench/ (first build takes a few minutes).
 import { performance } from 'node:perf_hooks';
 import { sensorReadings } from '../src/science/sensorModel/index.ts';
-import { analyzeReadings } from '../src/signal/index.ts';
+import { analyzeReadings, type WatcherOptions } from '../src/signal/index.ts';
 import { scoreRun, summariseScores, truthWindows, type RunScore, type ScoredEvent, type ScoreSummary } from '../src/signal/scoring/index.ts';
 import { syntheticTruth } from '../tests/support/syntheticTruth.ts';
-import { makeCorpus, type CorpusRun } from './corpus.ts';
+import { makeCorpus, syntheticTruthSource, type CorpusRun, type TruthSource } from './corpus.ts';
 import { fixedAlarmPeer, slopePeer } from './peers.ts';
+import { simulatedTruthSource } from './simulatedTruth.ts';
 
-const count = Number(process.argv[2] ?? 240);
-const seed = Number(process.argv[3] ?? 20251201);
+const args = process.argv.slice(2);
+const positional = args.filter((a, i) => !a.startsWith('--') && args[i - 1] !== '--only' && args[i - 1] !== '--options');
+const quick = process.argv.includes('--quick');
+const count = Number(positional[0] ?? (quick ? 60 : 240));
+const seed = Number(positional[1] ?? 20251201);
 const verbose = process.argv.includes('--verbose');
+const onlyIndex = args.indexOf('--only');
+const only = onlyIndex >= 0 ? args[onlyIndex + 1] : undefined;
+
+// --options '{"plateauHoldS": 30}' overrides watcher defaults, for tuning sweeps.
+const optionsIndex = args.indexOf('--options');
+const overrides = optionsIndex >= 0 ? (JSON.parse(args[optionsIndex + 1] ?? '{}') as Partial<WatcherOptions>) : {};
 
 type Detector = { name: string; run: (r: CorpusRun) => ScoredEvent[] };
 const detectors: Detector[] = [
-  { name: 'run watcher', run: (r) => analyzeReadings(r.timeS, r.headC) },
-  { name: 'fixed bp+3 alarm', run: (r) => fixedAlarmPeer(r.timeS, r.headC, r.boilingPointsC) },
-  { name: 'moving-average slope', run: (r) => slopePeer(r.timeS, r.headC) },
+  { name: 'run watcher', run: (r) => analyzeReadings(r.timeS, r.headC, [], overrides) },
+  { name: 'fixed bp+3', run: (r) => fixedAlarmPeer(r.timeS, r.headC, r.boilingPointsC) },
+  { name: 'MA slope', run: (r) => slopePeer(r.timeS, r.headC) },
 ];
-
-const t0 = performance.now();
-const corpus = makeCorpus(seed, count);
-const buildS = (performance.now() - t0) / 1000;
-const hours = corpus.reduce((sum, r) => sum + (r.timeS[r.timeS.length - 1]! - r.timeS[0]!) / 3600, 0);
-const readings = corpus.reduce((sum, r) => sum + r.timeS.length, 0);
-console.log(`corpus: ${corpus.length} runs, seed ${seed}, ${hours.toFixed(1)} h, ${readings} readings (built in ${buildS.toFixed(1)} s)`);
-const scenarios = new Map<string, number>();
-for (const r of corpus) scenarios.set(r.spec.scenario, (scenarios.get(r.spec.scenario) ?? 0) + 1);
-console.log(`scenarios: ${[...scenarios].map(([k, v]) => `${k} ${v}`).join(', ')}; hand-read runs ${corpus.filter((r) => r.isHand).length}`);
+const corpora: { name: string; source: TruthSource }[] = [
+  { name: 'simulated (column simulator)', source: simulatedTruthSource },
+  { name: 'synthetic profiles', source: syntheticTruthSource },
+].filter((c) => only === undefined || c.name.startsWith(only));
 
 const fast = (r: CorpusRun): boolean => !r.isHand && r.intervalS <= 2;
-for (const detector of detectors) {
-  const all: RunScore[] = [], fastScores: RunScore[] = [];
-  for (const run of corpus) {
-    const { alarms, plateaus } = truthWindows(run.truth, medianInterval(run.timeS), run.isHand);
-    const events = detector.run(run);
-    const score = scoreRun(alarms, plateaus, events);
-    all.push(score);
-    if (fast(run)) fastScores.push(score);
-    if (verbose && detector.name === 'run watcher') explain(run, alarms, events, score);
+const lengthH = (r: CorpusRun): number => (r.timeS[r.timeS.length - 1]! - r.timeS[0]!) / 3600;
+
+const columns: { corpus: string; detector: string; all: ScoreSummary; fast: ScoreSummary }[] = [];
+for (const corpus of corpora) {
+  const t0 = performance.now();
+  const runs = makeCorpus(seed, count, corpus.source);
+  const buildS = (performance.now() - t0) / 1000;
+  const hours = runs.reduce((sum, r) => sum + lengthH(r), 0);
+  const readings = runs.reduce((sum, r) => sum + r.timeS.length, 0);
+  const scenarios = new Map<string, number>();
+  for (const r of runs) scenarios.set(r.spec.scenario, (scenarios.get(r.spec.scenario) ?? 0) + 1);
+  const truths = new Map<string, number>();
+  for (const r of runs) for (const a of truthWindows(r.truth, 1, r.isHand).alarms) truths.set(a.kind, (truths.get(a.kind) ?? 0) + 1);
+  console.log(`${corpus.name}: ${runs.length} runs, seed ${seed}, ${hours.toFixed(1)} h, ${readings} readings (built in ${buildS.toFixed(1)} s)`);
+  console.log(`  scenarios: ${[...scenarios].map(([k, v]) => `${k} ${v}`).join(', ')}; hand-read runs ${runs.filter((r) => r.isHand).length}`);
+  console.log(`  truth alarms: ${[...truths].map(([k, v]) => `${k} ${v}`).join(', ')}`);
+  const fastHours = runs.filter(fast).reduce((sum, r) => sum + lengthH(r), 0);
+  for (const detector of detectors) {
+    const all: RunScore[] = [], fastScores: RunScore[] = [];
+    for (const run of runs) {
+      const { alarms, plateaus } = truthWindows(run.truth, medianInterval(run.timeS), run.isHand);
+      const events = detector.run(run);
+      const score = scoreRun(alarms, plateaus, events);
+      all.push(score);
+      if (fast(run)) fastScores.push(score);
+      if (verbose && detector.name === 'run watcher') explain(run, alarms, events, score);
+    }
+    columns.push({ corpus: corpus.name, detector: detector.name, all: summariseScores(all, hours), fast: summariseScores(fastScores, fastHours) });
   }
-  const fastHours = corpus.filter(fast).reduce((sum, r) => sum + (r.timeS[r.timeS.length - 1]! - r.timeS[0]!) / 3600, 0);
-  print(detector.name, summariseScores(all, hours), summariseScores(fastScores, fastHours));
 }
+printTable();
 
 // Throughput: 8 h at 10 Hz.
 const long = syntheticTruth({
@@ -60,13 +86,33 @@ for (let rep = 0; rep < 5; rep++) {
 }
 console.log(`\nthroughput: ${n} readings (8 h at 10 Hz) in ${(best / 1000).toFixed(3)} s (best of 5; target < 0.5 s), ${(n / best / 1000).toFixed(2)} M readings/s`);
 
-function print(name: string, s: ScoreSummary, f: ScoreSummary): void {
-  const pct = (x: number): string => (Number.isNaN(x) ? '  -  ' : x.toFixed(3));
-  console.log(`\n${name}`);
-  console.log(`  recall: vapour ${pct(s.recall.vapour)}  plateau ${pct(s.recall.plateau)}  breakthrough ${pct(s.recall.breakthrough)}  stall ${pct(s.recall.stall)}  sensor-fault ${pct(s.recall['sensor-fault'])}  all alarms ${pct(s.alarmRecall)}`);
-  console.log(`  false alarms: ${s.falseAlarmCount} (${s.nuisanceAlarmCount} nuisance) = ${s.falseAlarmsPerHour.toFixed(3)} per hour`);
-  console.log(`  breakthrough latency, all runs: median ${s.latencyMedianS.toFixed(1)} s, p90 ${s.latencyP90S.toFixed(1)} s`);
-  console.log(`  readings every 2 s or faster: breakthrough recall ${pct(f.recall.breakthrough)}, latency median ${f.latencyMedianS.toFixed(1)} s, p90 ${f.latencyP90S.toFixed(1)} s`);
+function printTable(): void {
+  const f3 = (x: number): string => (Number.isNaN(x) ? '-' : x.toFixed(3));
+  const f1 = (x: number): string => (Number.isNaN(x) ? '-' : x.toFixed(1));
+  const rows: [string, (c: (typeof columns)[number]) => string][] = [
+    ['recall vapour', (c) => f3(c.all.recall.vapour)],
+    ['recall plateau', (c) => f3(c.all.recall.plateau)],
+    ['recall breakthrough', (c) => f3(c.all.recall.breakthrough)],
+    ['recall stall', (c) => f3(c.all.recall.stall)],
+    ['recall sensor-fault', (c) => f3(c.all.recall['sensor-fault'])],
+    ['alarm recall (target >= 0.97)', (c) => f3(c.all.alarmRecall)],
+    ['false alarms (nuisance)', (c) => `${c.all.falseAlarmCount} (${c.all.nuisanceAlarmCount})`],
+    ['false alarms per hour (<= 0.05)', (c) => f3(c.all.falseAlarmsPerHour)],
+    ['breakthrough latency median, s', (c) => f1(c.all.latencyMedianS)],
+    ['breakthrough latency p90, s', (c) => f1(c.all.latencyP90S)],
+    ['<= 2 s readings: breakthrough recall (>= 0.95)', (c) => f3(c.fast.recall.breakthrough)],
+    ['<= 2 s readings: latency median, s (<= 20)', (c) => f1(c.fast.latencyMedianS)],
+    ['<= 2 s readings: latency p90, s (<= 60)', (c) => f1(c.fast.latencyP90S)],
+  ];
+  const labelWidth = Math.max(...rows.map((r) => r[0].length)) + 2;
+  const width = 13;
+  console.log('');
+  const groups = [...new Set(columns.map((c) => c.corpus))];
+  console.log(''.padEnd(labelWidth) + groups.map((g) => `| ${g}`.padEnd(width * detectors.length + 2)).join(''));
+  console.log(''.padEnd(labelWidth) + groups.map(() => `| ${detectors.map((d) => d.name.padEnd(width)).join('')} `).join(''));
+  for (const [label, value] of rows) {
+    console.log(label.padEnd(labelWidth) + groups.map((g) => `| ${columns.filter((c) => c.corpus === g).map((c) => value(c).padEnd(width)).join('')} `).join(''));
+  }
 }
 
 function medianInterval(timeS: Float64Array): number {
@@ -79,7 +125,7 @@ function medianInterval(timeS: Float64Array): number {
 function explain(run: CorpusRun, alarms: ReturnType<typeof truthWindows>['alarms'], events: ScoredEvent[], score: RunScore): void {
   const missed = Object.entries(score.truthCount).some(([k, v]) => score.hitCount[k as keyof typeof score.hitCount] < v);
   if (!missed && score.falseAlarmCount === 0) return;
-  console.log(`-- ${run.id} ${run.spec.scenario} ${run.label} plates ${run.spec.plates}: missed ${missed}, false ${score.falseAlarmCount}`);
+  console.log(`-- ${run.id} ${run.spec.scenario} ${run.spec.components.map((c) => c.name).join('/')} ${run.label} plates ${run.spec.plates}: missed ${missed}, false ${score.falseAlarmCount}`);
   for (const a of alarms) console.log(`   truth ${a.kind} at ${a.timeS.toFixed(0)} [${a.fromS.toFixed(0)}, ${a.toS.toFixed(0)}]`);
   for (const e of events) console.log(`   event ${e.kind} at ${e.timeS.toFixed(1)} ${e.headC.toFixed(2)}${'reason' in e ? ` ${String(e.reason)}` : ''}`);
 }

@@ -4,3 +4,15 @@ export * from './pressure/index.ts';
 export * from './compounds/index.ts';
 export * from './vle/index.ts';
 export * from './plan/index.ts';
+export * from './solver/index.ts';
+// The column simulator's own cut plan (what receivers collect) is not the planner's CutPlan.
+export {
+  constantVolatilityEquilibrium, raoultEquilibrium, simulateBatchStill, findPlateaus, APPARATUS_DEFAULTS,
+  fenskeStages, estimatePlatesFromFractions, fitPlatesToHeadCurve, columnEquilibrium, componentDataFor, heatForBoilup,
+} from './column/index.ts';
+export type {
+  StageEquilibrium, ComponentData, ConstantVolatilityOptions, SaturationPressure, BatchStillConfig, ColumnSpec,
+  PotSpec, HeadSpec, HeatStep, CutPlan as StillCutPlan, HeadTemperatureWindow, TimeCut, VolumeCut, BatchStillRun,
+  BatchStillTrace, BatchStillAnnotations, ReceiverContent, Plateau, Interval, PlateEstimate, HeadCurve, PlateFit,
+  SimulatorComponentData, BoilupHeatInput,
+} from './column/index.ts';

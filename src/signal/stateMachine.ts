@@ -36,6 +36,11 @@ const RECOVERY_HOLD_S = 30;
 const CREEP_MAX_C_PER_S = 0.06;
 /** Crossing a planned cut needs this margin above the window's top, held this long. */
 const CUT_MARGIN_C = 0.3;
+/** A plateau reached within this of the level a breakthrough left (or of the shoulder before
+ * it) is a shoulder of the same climb (a few-plate column lets the head pause on its way up), not the next component: its
+ * own rise raises no second alarm. Chosen on the simulated corpus; lab solvents worth
+ * separating boil further apart than this. Units: degC. */
+const SHOULDER_C = 3;
 const CUT_HOLD_S = 5;
 
 /** One reading that passed the spike filter; the filters have already taken it. */
@@ -47,12 +52,12 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
       break;
     case 'stalled':
       if (s.stallReason === 'no-vapour') watchForVapour(s, timeS, valueC, dtS, sink);
-      else if (s.stallReason === 'creeping') watchRising(s, timeS, fastC, sink);
+      else if (s.stallReason === 'creeping') watchRising(s, timeS, valueC, fastC, sink);
       else watchRecovery(s, timeS, fastC, sink);
       break;
     case 'rising':
     case 'leaving':
-      watchRising(s, timeS, fastC, sink);
+      watchRising(s, timeS, valueC, fastC, sink);
       break;
     case 'plateau':
       watchPlateau(s, timeS, valueC, dtS, fastC, sink);
@@ -83,9 +88,12 @@ function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: num
   if (valueC - s.baselineC < s.options.vapourRiseC / 2) s.baselineC += -Math.expm1(-dtS / BASELINE_TAU_S) * (valueC - s.baselineC);
 }
 
-function watchRising(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
+function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: number, sink: EventSink): void {
   const o = s.options;
-  s.peakC = Math.max(s.peakC, fastC);
+  // The fast local-linear fit overshoots where a steep climb stops (by about slope x tau: 10
+  // degC after vapour arrives in a few seconds); the reading itself does not. The lesser of the
+  // two has neither the overshoot nor the noise peaks, so a fall is measured from a real top.
+  s.peakC = Math.max(s.peakC, Math.min(fastC, valueC));
   const interval = s.intervalS;
   const isSteady = Math.abs(ewRegressionSlope(s.slow)) <= o.flatSlopeCPerS;
   if (!isSteady) s.plateauCandidateS = NaN;
@@ -109,6 +117,10 @@ function watchRising(s: WatcherState, timeS: number, fastC: number, sink: EventS
 }
 
 function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: EventSink): void {
+  // Restored states saved before brokeFromC existed carry undefined: no shoulder then.
+  s.isShoulder = s.state === 'leaving' && levelC < (s.brokeFromC ?? NaN) + SHOULDER_C;
+  // Shoulders chain: a climb that pauses every 2-3 degC is still one climb.
+  if (s.isShoulder) s.brokeFromC = levelC;
   s.levelC = levelC;
   s.levelCount = 1;
   s.cusumCS = 0;
@@ -151,14 +163,20 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
   const thresholdCS = cusumThresholdForMeanTime(o.breakthroughReferenceC, diffusionC2S, o.targetFalseAlarmIntervalH * 3600);
   s.cusumCS = Math.max(0, s.cusumCS + (residualC - o.breakthroughReferenceC) * dtS);
   if (s.cusumCS >= thresholdCS && fastC - s.levelC >= o.breakthroughMinRiseC) {
+    s.peakC = fastC;
+    s.plateauCandidateS = NaN;
+    s.fallSinceS = NaN;
+    if (s.isShoulder) {
+      // Still the climb the last alarm announced: carry on rising without a second alarm.
+      sink.setState('leaving', timeS);
+      return;
+    }
+    s.brokeFromC = s.levelC;
     let receiver: number | undefined;
     if (s.plan.length > 0 && s.receiverIndex + 1 < s.plan.length) {
       s.receiverIndex++;
       receiver = s.plan[s.receiverIndex]!.receiver;
     }
-    s.peakC = fastC;
-    s.plateauCandidateS = NaN;
-    s.fallSinceS = NaN;
     sink.setState('leaving', timeS);
     sink.emit(timeS, 'breakthrough', fastC, undefined, receiver);
     return;

@@ -38,6 +38,10 @@ export interface WatcherState {
   sagSinceS: number;
   cusumCS: number;
   residualPowerC2: number;
+  /** Level of the plateau the last breakthrough left (NaN before any). Units: degC. */
+  brokeFromC: number;
+  /** The current plateau is a shoulder of the climb out of that one: it raises no breakthrough. */
+  isShoulder: boolean;
   hasRaisedNoVapour: boolean;
   hasRaisedCreep: boolean;
   /** Since when the head has climbed slowly without settling. Units: s. */
@@ -56,7 +60,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): 
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30),
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
-    residualPowerC2: NaN,
+    residualPowerC2: NaN, brokeFromC: NaN, isShoulder: false,
     hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
   };
 }

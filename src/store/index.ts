@@ -9,3 +9,5 @@ export { defaultSettings, loadSettings, saveSettings, pressureUnitSettings } fro
 export type { Settings, TemperatureUnitSetting, PressureUnitSetting, DecimalSeparatorSetting } from './settings.ts';
 export { listSavedRuns, loadRunRecord, saveFinishedRun, editFinishedRun, removeRun, restoreRun, RunIdTakenError } from './savedRuns.ts';
 export type { ImportOutcome, RemovedRun, SavedRunSummary } from './savedRuns.ts';
+export { saveColumnEstimate, loadColumnEstimate, columnEstimateKey } from './columnEstimates.ts';
+export type { ColumnEstimate, PlateEstimateMethod } from './columnEstimates.ts';

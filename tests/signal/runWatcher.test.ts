@@ -165,3 +165,43 @@ describe('RunWatcher', () => {
     expect(() => new RunWatcher({}, [{ receiver: 1, fromC: 50, toC: 60 }, { receiver: 2, fromC: 59, toC: 70 }])).toThrow(/overlap/);
   });
 });
+
+describe('RunWatcher on shapes the column simulator makes', () => {
+  // Invented test profiles (no source needed): the shapes, not the numbers, come from
+  // simulateBatchStill runs of few-plate columns.
+  function profile(points: [number, number][]): { timeS: Float64Array; headC: Float64Array } {
+    const end = points.at(-1)![0];
+    const timeS = Float64Array.from({ length: end + 1 }, (_, i) => i);
+    const headC = timeS.map((t) => {
+      const k = points.findIndex(([pt]) => pt > t);
+      if (k <= 0) return points[k < 0 ? points.length - 1 : 0]![1];
+      const [t0, v0] = points[k - 1]!, [t1, v1] = points[k]!;
+      return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
+    });
+    // Through a board: 0.2 s readings, 0.2 degC noise, 0.25 degC steps, 1 s probe lag.
+    return sensorReadings(timeS, headC, { seed: 3, intervalS: 0.2, noiseSdC: 0.2, quantumC: 0.25, lagTauS: 1 });
+  }
+
+  it('a vapour arrival from 20 to 74 degC in 10 s raises no stall and finds the plateau', () => {
+    const { timeS, headC } = profile([[0, 20], [600, 20.5], [610, 74], [2400, 74.3]]);
+    const events = analyzeReadings(timeS, headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau']);
+    expect(Math.abs(events[1]!.headC - 74.1)).toBeLessThan(0.5);
+  });
+
+  it('a climb that pauses every 2 degC after a breakthrough raises one breakthrough alarm, not one per pause', () => {
+    const { timeS, headC } = profile([
+      [0, 20], [300, 20], [310, 110], [1500, 110.2], [1560, 112], [1800, 112.1], [1860, 114], [2100, 114.1], [2160, 116], [2400, 116.1],
+    ]);
+    const events = analyzeReadings(timeS, headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau', 'plateau', 'plateau']);
+    expect(events[2]!.timeS).toBeGreaterThan(1500);
+    expect(events[2]!.timeS).toBeLessThan(1560);
+  });
+
+  it('a plateau 10 degC above the last one is the next component: its own rise alarms again', () => {
+    const { timeS, headC } = profile([[0, 20], [300, 20], [310, 80], [1500, 80.2], [1600, 92], [2800, 92.2], [2900, 104], [3600, 104]]);
+    const events = analyzeReadings(timeS, headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau', 'breakthrough', 'plateau']);
+  });
+});

@@ -3,6 +3,7 @@ import { analyze } from './analyze.ts';
 import { bp } from './bp.ts';
 import { bubble, dew } from './equilibriumCommand.ts';
 import { plan } from './plan.ts';
+import { simulate } from './simulate.ts';
 import { pressure } from './pressure.ts';
 import { tc } from './tc.ts';
 
@@ -14,5 +15,6 @@ export const commands: Command[] = [
   dew,
   pressure,
   plan,
+  simulate,
   tc,
 ];

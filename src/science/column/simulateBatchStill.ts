@@ -87,9 +87,11 @@ export function simulateBatchStill(config: BatchStillConfig): BatchStillRun {
   let derivedEnd = new DerivedValues(c);
   const writeSamplesUpTo = (tS: number): void => {
     derivedEnd.capture(model, integrator.y, integrator.t);
-    while (nextSample < sampleCount && nextSample * config.sampleIntervalS <= tS) {
+    // sampleCount rounds up by 1e-9 of an interval, so a duration a rounding error short of a
+    // whole interval still gets its last sample: it is read at the end of the run.
+    while (nextSample < sampleCount && nextSample * config.sampleIntervalS <= tS + 1e-9 * config.sampleIntervalS) {
       const ts = nextSample * config.sampleIntervalS;
-      integrator.interpolate(ts, probe);
+      integrator.interpolate(Math.min(ts, tS), probe);
       writeSample(trace, nextSample, ts, probe, model, derivedStart, derivedEnd);
       nextSample++;
     }

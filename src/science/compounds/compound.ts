@@ -28,6 +28,8 @@ export interface Compound {
   vapourPressure: VapourPressureCorrelation;
   /** Enthalpy of vaporisation near the normal boiling point. Units: J/mol */
   enthalpyOfVaporisationJPerMol: number;
+  /** Liquid heat capacity near 25 degC, or null when unknown. Units: J/(mol K) */
+  liquidHeatCapacityJPerMolK: number | null;
   /** Refractive index n_D at 20 degC (dimensionless). */
   refractiveIndexD20: number | null;
   /** Units: K */

@@ -1,5 +1,6 @@
 import type { Compound } from './compound.ts';
 import { handbookProperties } from './handbookProperties.ts';
+import { liquidHeatCapacitiesJPerMolK } from './liquidHeatCapacities.ts';
 import { molarMassFromFormula } from './molarMassFromFormula.ts';
 import { normaliseName } from './normaliseName.ts';
 import { referenceRecords } from './referenceData.generated.ts';
@@ -29,6 +30,7 @@ function buildCompound(record: (typeof referenceRecords)[number]): Compound {
     normalBoilingPointK: record.tbCrcK,
     vapourPressure: record.correlation,
     enthalpyOfVaporisationJPerMol: calorimetricEnthalpyJPerMol[record.cas] ?? clausiusClapeyronEnthalpyJPerMol({ vapourPressure: record.correlation }, record.tbCrcK),
+    liquidHeatCapacityJPerMolK: liquidHeatCapacitiesJPerMolK[record.cas] ?? null,
     refractiveIndexD20: entry.refractiveIndexD20,
     flashPointK: entry.flashPointC === null ? null : entry.flashPointC + 273.15,
     autoignitionK: entry.autoignitionC === null ? null : entry.autoignitionC + 273.15,
@@ -49,6 +51,7 @@ function buildCompound(record: (typeof referenceRecords)[number]): Compound {
       formula: fromMemory,
       synonyms: fromMemory,
       liquidDensityKgPerM3: fromMemory,
+      liquidHeatCapacityJPerMolK: '(from memory) NIST WebBook / CRC Handbook value near 25 degC, see liquidHeatCapacities.ts',
       refractiveIndexD20: fromMemory,
       flashPointK: fromMemory,
       autoignitionK: fromMemory,

@@ -29,6 +29,8 @@ export interface UserCompoundInput {
   molarMassKgPerMol?: number;
   /** Units: kg/m^3 */
   liquidDensityKgPerM3?: number;
+  /** Units: J/(mol K) */
+  liquidHeatCapacityJPerMolK?: number;
   antoine?: UserAntoine;
   /** Choose the hydrogen-bonded Trouton constant (alcohols, acids, amines, water). */
   isHydrogenBonded?: boolean;
@@ -61,6 +63,7 @@ export function makeUserCompound(input: UserCompoundInput): Compound {
   if (!(tbK > 0) || !Number.isFinite(tbK)) throw new RangeError(`${name}: normal boiling point must be > 0 K`);
   if (input.molarMassKgPerMol !== undefined && !(input.molarMassKgPerMol > 0)) throw new RangeError(`${name}: molar mass must be > 0`);
   if (input.liquidDensityKgPerM3 !== undefined && !(input.liquidDensityKgPerM3 > 0)) throw new RangeError(`${name}: density must be > 0`);
+  if (input.liquidHeatCapacityJPerMolK !== undefined && !(input.liquidHeatCapacityJPerMolK > 0)) throw new RangeError(`${name}: heat capacity must be > 0`);
   const entropy = input.isHydrogenBonded ? hydrogenBondedEntropyJPerMolK : troutonEntropyJPerMolK;
   const hVapJPerMol = entropy * tbK;
   const estimateNotes: string[] = [];
@@ -84,6 +87,7 @@ export function makeUserCompound(input: UserCompoundInput): Compound {
     normalBoilingPointK: tbK,
     vapourPressure,
     enthalpyOfVaporisationJPerMol: hVapJPerMol,
+    liquidHeatCapacityJPerMolK: input.liquidHeatCapacityJPerMolK ?? null,
     refractiveIndexD20: null,
     flashPointK: null,
     autoignitionK: null,

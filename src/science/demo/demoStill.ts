@@ -1,17 +1,24 @@
 /**
- * A small, honest demo of a batch fractional distillation: ethyl acetate recovered from butyl
- * acetate (a solvent-recovery scenario of our own). It is a shortcut model, good enough to drive
- * the Watch screen before a real plan exists; the column simulator is the tool for predictions.
+ * The demo still: a playback of one column-simulator run of the demo charge, ethyl acetate
+ * recovered from butyl acetate (a solvent-recovery scenario of our own), read through a
+ * thermocouple board's model (probe lag, a little noise, 0.25 degC converter steps).
  *
- * Model: ideal Raoult's law with Antoine vapour pressures; the pot follows Rayleigh's balance;
- * the distillate is enriched over the pot as at total reflux through `plates` theoretical stages
- * (Fenske's relation, x_D/(1-x_D) = alpha^(N+1) x_W/(1-x_W)); the head reads the dew point of the
- * distillate. Start-up: the pot warms to its bubble point, then vapour takes a while to climb the
- * column. When the pot is nearly dry the vapour stops and the head cools.
+ * The run is simulated once per set of options (a few hundred ms, then memoised), on a 1 s grid
+ * from heat on until well after the pot has run dry; `step(dt)` moves a playback clock along it,
+ * so any time acceleration costs only interpolation. A snapshot is just the playback position
+ * (and what it showed), so a reopened app carries on exactly where it was.
  *
  * Pure: time comes in as the step length; no clock is read.
  */
-import { findCompound, pSatPa, type Compound } from '../compounds/index.ts';
+import { findCompound } from '../compounds/index.ts';
+import { molesFromAmounts } from '../vle/index.ts';
+import { APPARATUS_DEFAULTS } from '../column/apparatusDefaults.ts';
+import { columnEquilibrium } from '../column/columnEquilibrium.ts';
+import { componentDataFor } from '../column/componentDataFor.ts';
+import { heatForBoilup } from '../column/heatForBoilup.ts';
+import { simulateBatchStill } from '../column/simulateBatchStill.ts';
+import { createRandom } from '../sensorModel/random.ts';
+import { firstOrderLag } from '../sensorModel/firstOrderLag.ts';
 
 export interface DemoStillOptions {
   /** Room temperature. Units: degC */
@@ -20,12 +27,18 @@ export interface DemoStillOptions {
   pressurePa?: number;
   /** Theoretical stages of the column (0 = simple distillation). */
   plates?: number;
-  /** Boil-up once boiling. Units: mol/s */
-  boilupMolPerS?: number;
+  /** Vapour reaching the still head once the column is warm, as liquid. Units: mL/min */
+  boilupMlPerMin?: number;
   /** Reflux ratio L/D at the head. */
   refluxRatio?: number;
-  /** Time for vapour to climb the column once the pot boils. Units: s */
-  columnWarmUpS?: number;
+  /** Board noise, standard deviation. Units: degC */
+  noiseSdC?: number;
+  /** Converter step of the board. Units: degC */
+  quantumC?: number;
+  /** Probe time constant. Units: s */
+  probeTauS?: number;
+  /** Seed of the board noise. */
+  seed?: number;
 }
 
 export type DemoPhase = 'heating' | 'column' | 'distilling' | 'dry';
@@ -33,7 +46,7 @@ export type DemoPhase = 'heating' | 'column' | 'distilling' | 'dry';
 export interface DemoStillState {
   timeS: number;
   phase: DemoPhase;
-  /** Head temperature the bulb sees (noise-free). Units: degC */
+  /** Head temperature as the board reports it (lagged, noisy, in converter steps). Units: degC */
   headC: number;
   /** Pot liquid temperature. Units: degC */
   potC: number;
@@ -45,59 +58,80 @@ export interface DemoStillState {
   distilledMl: number;
 }
 
-// The demo pair from the compound library (vapour pressure from Poling 5th ed., see compounds/).
-const light = findCompound('ethyl acetate');
-const heavy = findCompound('n-butyl acetate');
-const components = [light, heavy] as const;
-
-/** Liquid molar volume near 20 degC. Units: mL/mol */
-const molarVolumeMl = (c: Compound) => ((c.molarMassKgPerMol ?? Number.NaN) / (c.liquidDensityKgPerM3 ?? Number.NaN)) * 1e6;
-
-/** Dew point of a binary vapour with light mole fraction y, by bisection on sum x = 1. */
-function dewPointK(y: number, pPa: number): number {
-  let lo = 250;
-  let hi = 500;
-  for (let i = 0; i < 60; i++) {
-    const t = 0.5 * (lo + hi);
-    const sumX = (y * pPa) / pSatPa(light, t) + ((1 - y) * pPa) / pSatPa(heavy, t);
-    if (sumX > 1) lo = t;
-    else hi = t;
-  }
-  return 0.5 * (lo + hi);
-}
-
-/** Bubble point of a binary liquid with light mole fraction x, by bisection on sum y = 1. */
-function bubblePointK(x: number, pPa: number): number {
-  let lo = 250;
-  let hi = 500;
-  for (let i = 0; i < 60; i++) {
-    const t = 0.5 * (lo + hi);
-    const sumY = (x * pSatPa(light, t) + (1 - x) * pSatPa(heavy, t)) / pPa;
-    if (sumY < 1) lo = t;
-    else hi = t;
-  }
-  return 0.5 * (lo + hi);
-}
-
 export const demoMixture = {
   title: 'ethyl acetate from butyl acetate',
-  components: components.map((c) => c.name),
-  compounds: components,
+  components: ['ethyl acetate', 'n-butyl acetate'],
+  compounds: [findCompound('ethyl acetate'), findCompound('n-butyl acetate')] as const,
   /** Charge: 30 mL of each. */
   chargeMl: [30, 30],
 };
 
-/** Everything needed to carry a demo run on after the app was closed. */
-export interface DemoStillSnapshot extends DemoStillState {
-  boilingForS: number;
-}
+/** Everything needed to carry a demo run on after the app was closed: the playback position. */
+export type DemoStillSnapshot = DemoStillState;
 
 export interface DemoStill {
   readonly state: DemoStillState;
   /** The full internal state, to save and pass back to createDemoStill. */
   snapshot(): DemoStillSnapshot;
-  /** Advances the model by dtS seconds and returns the new state. */
+  /** Advances the playback by dtS seconds and returns the new state. */
   step(dtS: number): DemoStillState;
+}
+
+interface Playback {
+  readonly headC: Float64Array;
+  readonly potC: Float64Array;
+  readonly potMol: Float64Array;
+  readonly potLight: Float64Array;
+  readonly distilledMl: Float64Array;
+  readonly boilsS: number;
+  readonly vapourS: number;
+  readonly dryS: number;
+}
+
+const DURATION_S = 4 * 3600;
+const cache = new Map<string, Playback>();
+
+function simulateDemo(roomC: number, pressurePa: number, plates: number, boilupMlPerMin: number, reflux: number, probeTauS: number): Playback {
+  const key = [roomC, pressurePa, plates, boilupMlPerMin, reflux, probeTauS].join('|');
+  const cached = cache.get(key);
+  if (cached) return cached;
+  const compounds = demoMixture.compounds;
+  const equilibrium = columnEquilibrium(compounds, 'ideal');
+  const components = componentDataFor(compounds);
+  const chargeMol = molesFromAmounts(compounds, demoMixture.chargeMl.map((ml) => ml * 1e-6), 'volume');
+  const total = chargeMol.reduce((a, b) => a + b, 0);
+  const roomK = roomC + 273.15;
+  const heatW = heatForBoilup({
+    equilibrium, components, x: chargeMol.map((n) => n / total), pressurePa, roomK, boilupM3PerS: (boilupMlPerMin * 1e-6) / 60,
+    potLossWPerK: APPARATUS_DEFAULTS.lossWPerK, columnLossWPerK: APPARATUS_DEFAULTS.wallLossWPerK + APPARATUS_DEFAULTS.headLossWPerK,
+  });
+  const run = simulateBatchStill({
+    equilibrium, components, chargeMol, pressurePa, roomK,
+    column: { stages: plates, refluxRatio: reflux }, heat: [{ fromS: 0, heatW }], durationS: DURATION_S, sampleIntervalS: 1,
+  });
+  const t = run.trace;
+  const truthC = t.headK.map((k) => k - 273.15);
+  const potMol = t.potMol[0]!.map((n, i) => n + t.potMol[1]![i]!);
+  const playback: Playback = {
+    headC: firstOrderLag(t.timeS, truthC, probeTauS),
+    potC: t.potK.map((k) => k - 273.15),
+    potMol,
+    potLight: t.potMol[0]!.map((n, i) => (potMol[i]! > 0 ? n / potMol[i]! : 0)),
+    distilledMl: t.distilledM3.map((m) => m * 1e6),
+    boilsS: run.annotations.potBoilingS[0] ?? Infinity,
+    vapourS: run.annotations.vapourArrivalS ?? Infinity,
+    dryS: run.annotations.potDryS ?? Infinity,
+  };
+  cache.set(key, playback);
+  return playback;
+}
+
+function at(series: Float64Array, tS: number): number {
+  const last = series.length - 1;
+  if (!(tS > 0)) return series[0]!;
+  if (tS >= last) return series[last]!;
+  const i = Math.floor(tS);
+  return series[i]! + (tS - i) * (series[i + 1]! - series[i]!);
 }
 
 export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStillSnapshot): DemoStill {
@@ -105,92 +139,44 @@ export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStill
   const pressurePa = options.pressurePa ?? 101_325;
   if (!(pressurePa > 0)) throw new RangeError('pressure must be > 0 Pa');
   const plates = options.plates ?? 4;
-  const boilup = options.boilupMolPerS ?? 2.0e-4;
+  const boilup = options.boilupMlPerMin ?? 4;
+  if (!(boilup > 0)) throw new RangeError('boil-up must be > 0 mL/min');
   const reflux = options.refluxRatio ?? 2;
-  const warmUpS = options.columnWarmUpS ?? 360;
+  const noiseSdC = options.noiseSdC ?? 0.05;
+  const quantumC = options.quantumC ?? 0.25;
+  const seed = options.seed ?? 1;
+  const playback = simulateDemo(roomC, pressurePa, plates, boilup, reflux, options.probeTauS ?? 1);
+  let timeS = from && from.timeS >= 0 ? from.timeS : 0;
 
-  const lightMol = demoMixture.chargeMl[0]! / molarVolumeMl(light);
-  const heavyMol = demoMixture.chargeMl[1]! / molarVolumeMl(heavy);
-  const chargeMol = lightMol + heavyMol;
+  const phaseAt = (tS: number): DemoPhase =>
+    tS >= playback.dryS ? 'dry' : tS >= playback.vapourS ? 'distilling' : tS >= playback.boilsS ? 'column' : 'heating';
 
-  let potMol = chargeMol;
-  let potLight = lightMol / chargeMol;
-  let potC = roomC;
-  let headC = roomC;
-  let distilledMl = 0;
-  let timeS = 0;
-  let boilingForS = 0;
-  let phase: DemoPhase = 'heating';
-  if (from) {
-    ({ potMol, potC, headC, distilledMl, timeS, boilingForS, phase } = from);
-    potLight = from.potLightFraction;
-  }
+  // Noise drawn from the time itself, so a restored playback reads exactly what it would have.
+  const readingAt = (tS: number): number => {
+    const noise = noiseSdC * createRandom(Math.imul(seed, 0x9e3779b1) ^ Math.round(tS * 1000)).normal();
+    const value = at(playback.headC, tS) + noise;
+    return quantumC > 0 ? Math.round(value / quantumC) * quantumC : value;
+  };
 
-  // Pot heating: first-order approach to a mantle well above the bubble point (time constant in s).
-  const mantleC = 150;
-  const heatTauS = 900;
-  // The bulb follows condensing vapour quickly and cools slowly in still air (PRIMER: sensors).
-  const bulbTauVapourS = 3;
-  const bulbTauAirS = 180;
-
-  const snapshot = (): DemoStillState => ({
-    timeS, phase, headC, potC, potMol, potLightFraction: potLight, distilledMl,
+  const current = (): DemoStillState => ({
+    timeS,
+    phase: phaseAt(timeS),
+    headC: readingAt(timeS),
+    potC: at(playback.potC, timeS),
+    potMol: at(playback.potMol, timeS),
+    potLightFraction: at(playback.potLight, timeS),
+    distilledMl: at(playback.distilledMl, timeS),
   });
-
-  function distil(dtS: number): void {
-    const tPotK = bubblePointK(potLight, pressurePa);
-    potC = tPotK - 273.15;
-    const alpha = pSatPa(light, tPotK) / pSatPa(heavy, tPotK);
-    // Fenske enrichment over plates + the pot as a stage; finite reflux costs about one stage.
-    const stages = Math.max(plates + 1 - 1 / (reflux + 1), 1);
-    const ratio = alpha ** stages * (potLight / Math.max(1 - potLight, 1e-12));
-    const distLight = ratio / (1 + ratio);
-    const distMolPerS = boilup / (reflux + 1);
-    const dMol = Math.min(distMolPerS * dtS, Math.max(potMol - 0.02 * chargeMol, 0));
-    const lightOut = Math.min(dMol * distLight, potMol * potLight);
-    potLight = (potMol * potLight - lightOut) / Math.max(potMol - dMol, 1e-12);
-    potLight = Math.min(Math.max(potLight, 0), 1);
-    potMol -= dMol;
-    distilledMl += lightOut * molarVolumeMl(light) + (dMol - lightOut) * molarVolumeMl(heavy);
-    const vapourC = dewPointK(distLight, pressurePa) - 273.15;
-    headC += (vapourC - headC) * (1 - Math.exp(-dtS / bulbTauVapourS));
-    if (potMol <= 0.021 * chargeMol) phase = 'dry';
-  }
-
-  function step(dtS: number): DemoStillState {
-    if (!(dtS >= 0)) throw new RangeError('time step must be >= 0 s');
-    timeS += dtS;
-    switch (phase) {
-      case 'heating': {
-        potC = mantleC + (potC - mantleC) * Math.exp(-dtS / heatTauS);
-        const bubbleC = bubblePointK(potLight, pressurePa) - 273.15;
-        if (potC >= bubbleC) {
-          potC = bubbleC;
-          phase = 'column';
-        }
-        break;
-      }
-      case 'column':
-        boilingForS += dtS;
-        // The head warms a little by conduction while vapour climbs.
-        headC += (roomC + 4 - headC) * (1 - Math.exp(-dtS / 600));
-        if (boilingForS >= warmUpS) phase = 'distilling';
-        break;
-      case 'distilling':
-        distil(dtS);
-        break;
-      case 'dry':
-        headC += (roomC - headC) * (1 - Math.exp(-dtS / bulbTauAirS));
-        break;
-    }
-    return snapshot();
-  }
 
   return {
     get state() {
-      return snapshot();
+      return current();
     },
-    snapshot: () => ({ ...snapshot(), boilingForS }),
-    step,
+    snapshot: current,
+    step(dtS: number) {
+      if (!(dtS >= 0)) throw new RangeError('time step must be >= 0 s');
+      timeS += dtS;
+      return current();
+    },
   };
 }

@@ -1,7 +1,10 @@
-// A run record from the project's demo still (ethyl acetate from butyl acetate), with receivers
-// changed at set head temperatures and each receiver's true make-up taken from the still's pot.
+// A run record of the demo charge (ethyl acetate from butyl acetate) from the project's column
+// simulator, with receivers changed at set head temperatures and each receiver's true make-up
+// taken from the simulator's own receiver ledger.
 import { createRunHeader, toRunRecord, type RunRecord } from '../../../src/run/index.ts';
-import { createDemoStill, demoMixture } from '../../../src/science/demo/index.ts';
+import { columnEquilibrium, componentDataFor, heatForBoilup, molesFromAmounts, simulateBatchStill } from '../../../src/science/index.ts';
+import { APPARATUS_DEFAULTS } from '../../../src/science/column/apparatusDefaults.ts';
+import { demoMixture } from '../../../src/science/demo/index.ts';
 import { analyzeReadings } from '../../../src/signal/index.ts';
 
 export interface DemoTruth {
@@ -12,7 +15,26 @@ export interface DemoTruth {
 }
 
 export function demoRunRecord(changeAtC = [80, 120]): { record: RunRecord; truth: DemoTruth[]; residueMol: [number, number] } {
-  const still = createDemoStill({ plates: 4 });
+  const compounds = demoMixture.compounds;
+  const equilibrium = columnEquilibrium(compounds, 'ideal');
+  const components = componentDataFor(compounds);
+  const chargeMol = molesFromAmounts(compounds, demoMixture.chargeMl.map((ml) => ml * 1e-6), 'volume');
+  const total = chargeMol.reduce((a, b) => a + b, 0);
+  const pressurePa = 101_325;
+  const roomK = 294.15;
+  const heatW = heatForBoilup({
+    equilibrium, components, x: chargeMol.map((n) => n / total), pressurePa, roomK, boilupM3PerS: 4e-6 / 60,
+    potLossWPerK: APPARATUS_DEFAULTS.lossWPerK, columnLossWPerK: APPARATUS_DEFAULTS.wallLossWPerK + APPARATUS_DEFAULTS.headLossWPerK,
+  });
+  const edges = [-50, ...changeAtC, 400];
+  const run = simulateBatchStill({
+    equilibrium, components, chargeMol, pressurePa, roomK,
+    column: { stages: 4, refluxRatio: 2 },
+    heat: [{ fromS: 0, heatW }],
+    durationS: 6 * 3600,
+    sampleIntervalS: 2,
+    cutPlan: { by: 'head-temperature', windows: edges.slice(1).map((toC, i) => ({ receiver: i + 1, fromC: edges[i]!, toC })) },
+  });
   const header = createRunHeader({
     id: 'demo-report',
     title: 'Demo: ethyl acetate from butyl acetate',
@@ -20,37 +42,23 @@ export function demoRunRecord(changeAtC = [80, 120]): { record: RunRecord; truth
     device: 'test',
     source: { kind: 'simulated', label: 'demo still' },
     charge: demoMixture.components.map((name, i) => ({ name, amount: demoMixture.chargeMl[i]!, unit: 'mL' as const })),
-    pressurePa: 101_325,
+    pressurePa,
     column: { description: 'demo column', theoretical_plates: 4 },
   });
-  const times: number[] = [];
-  const heads: number[] = [];
-  const truth: DemoTruth[] = [{ receiver: 1, volumeMl: 0, lightMol: 0, heavyMol: 0 }];
-  let state = still.state;
-  let potLight = state.potMol * state.potLightFraction;
-  let potHeavy = state.potMol - potLight;
-  let lastMl = 0;
-  for (let t = 2; t <= 6 * 3600 && state.phase !== 'dry'; t += 2) {
-    state = still.step(2);
-    times.push(t);
-    heads.push(state.headC);
-    const light = state.potMol * state.potLightFraction;
-    const heavy = state.potMol - light;
-    const current = truth.at(-1)!;
-    current.lightMol += potLight - light;
-    current.heavyMol += potHeavy - heavy;
-    current.volumeMl += state.distilledMl - lastMl;
-    potLight = light;
-    potHeavy = heavy;
-    lastMl = state.distilledMl;
-    const next = changeAtC[truth.length - 1];
-    if (next !== undefined && state.headC > next) {
-      header.receivers.push({ receiver: truth.length + 1, time_s: t, head_c: state.headC });
-      truth.push({ receiver: truth.length + 1, volumeMl: 0, lightMol: 0, heavyMol: 0 });
-    }
+  // The chemist ends the run once the pot is nearly dry: the record stops there.
+  const endIndex = run.trace.timeS.findIndex((t) => t >= (run.annotations.potDryS ?? Infinity));
+  const n = endIndex < 0 ? run.trace.timeS.length : endIndex + 1;
+  const times = run.trace.timeS.slice(0, n);
+  const heads = run.trace.headK.slice(0, n).map((k) => k - 273.15);
+  const truth: DemoTruth[] = run.receivers.map((r) => ({ receiver: r.receiver, volumeMl: r.volumeM3 * 1e6, lightMol: r.mol[0]!, heavyMol: r.mol[1]! }));
+  for (const r of run.receivers.slice(1)) {
+    const i = Math.max(0, times.findIndex((t) => t >= r.firstS));
+    header.receivers.push({ receiver: r.receiver, time_s: times[i]!, head_c: heads[i]! });
   }
-  header.events = analyzeReadings(Float64Array.from(times), Float64Array.from(heads)).map((e) => ({ time_s: e.timeS, event: e.kind, head_c: e.headC }));
+  header.events = analyzeReadings(times, heads).map((e) => ({ time_s: e.timeS, event: e.kind, head_c: e.headC }));
   header.status = 'ended';
   header.ended_at = '2026-12-01T12:00:00Z';
-  return { record: toRunRecord(header, times, heads), truth, residueMol: [potLight, potHeavy] };
+  // What is left drains back to the pot when the heat goes off: pot, column and head holdup.
+  const left = (j: number) => run.final.potMol[j]! + run.final.columnMol[j]! + run.final.headHoldupMol[j]!;
+  return { record: toRunRecord(header, times, heads), truth, residueMol: [left(0), left(1)] };
 }

@@ -279,6 +279,14 @@ describe('simulateBatchStill: cut plans and input checks', () => {
     expect(run.receivers[0]!.lastS).toBe(1800);
   });
 
+  it('a duration a rounding error short of a whole interval still fills its last sample', () => {
+    const durationS = 3600 - 1e-12; // as 3600 + 60 mL / (rate) can come out
+    const run = simulateBatchStill(binaryConfig(2, { durationS, sampleIntervalS: 1 }));
+    const t = run.trace.timeS;
+    expect(t[t.length - 1]).toBe(t.length - 1);
+    expect(run.trace.headK[t.length - 1]).toBeGreaterThan(250);
+  });
+
   it('does not modify the charge array it is given', () => {
     const chargeMol = Float64Array.from([0.2, 0.2]);
     simulateBatchStill(binaryConfig(2, { chargeMol, durationS: 60 }));

@@ -42,4 +42,16 @@ describe('compoundLibrary', () => {
   it('carries carbon disulfide\'s low autoignition point (about 90 degC, from memory; reference PRIMER)', () => {
     expect(findCompound('CS2').autoignitionK! - 273.15).toBeCloseTo(90, 0);
   });
+  it('gives every compound a liquid heat capacity of 0.8-4.3 J/(g K), water 4.18 J/(g K) within 1 % (common practice; water from steam tables, from memory)', () => {
+    // Organic liquids near room temperature hold about 1-2.5 J/(g K), heavy halogenated ones
+    // (chloroform, carbon tetrachloride) nearer 0.85-1, water 4.18 (common practice).
+    for (const c of compoundLibrary) {
+      const perGram = c.liquidHeatCapacityJPerMolK! / (c.molarMassKgPerMol! * 1000);
+      expect(perGram, c.name).toBeGreaterThan(0.8);
+      expect(perGram, c.name).toBeLessThan(4.3);
+      expect(c.sources.liquidHeatCapacityJPerMolK, c.name).toMatch(/from memory/);
+    }
+    const water = findCompound('water');
+    expect(Math.abs(water.liquidHeatCapacityJPerMolK! / (water.molarMassKgPerMol! * 1000) / 4.18 - 1)).toBeLessThan(0.01);
+  });
 });

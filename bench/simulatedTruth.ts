@@ -1,0 +1,166 @@
+// A TruthSource built on the column simulator: every corpus run is a simulateBatchStill run of
+// the spec's mixture, column, heat and pressure, with ground truth from its annotations.
+// Simulations cost 0.1-1 s each, so their truth is cached under .bench/ (gitignored), keyed by
+// the spec and the version below.
+import { createHash } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import {
+  APPARATUS_DEFAULTS, MissingUnifacDataError, columnEquilibrium, componentDataFor, findCompound, heatForBoilup,
+  molesFromAmounts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type HeatStep, type StageEquilibrium,
+} from '../src/science/index.ts';
+import { createRandom } from '../src/science/sensorModel/index.ts';
+import type { PurityInterval, RunTruth, TruthEvent } from '../src/signal/scoring/index.ts';
+import type { CorpusRunSpec, TruthSource, TruthSourceResult } from './corpus.ts';
+
+const VERSION = 'sim-truth-1';
+const CACHE_DIR = '.bench/simulated-truth';
+
+/** How a spec becomes a simulation: charge, reflux, boil-up and the heat schedule. */
+interface SimulationPlan {
+  compounds: Compound[];
+  chargeMl: number[];
+  refluxRatio: number;
+  roomK: number;
+  /** Vapour reaching the head once warm, scaled by the spec's heat. Units: mL/min. */
+  boilupMlPerMin: number;
+}
+
+function planFor(spec: CorpusRunSpec): SimulationPlan {
+  const r = createRandom(spec.seed ^ 0x51a7);
+  const compounds = spec.components.map((c) => findCompound(c.name));
+  const totalMl = 25 + 35 * r.uniform();
+  const weights = compounds.map(() => 0.5 + r.uniform());
+  const sum = weights.reduce((a, b) => a + b, 0);
+  return {
+    compounds,
+    chargeMl: weights.map((w) => (totalMl * w) / sum),
+    refluxRatio: 1 + 4 * r.uniform(),
+    roomK: 273.15 + 17 + 9 * r.uniform(),
+    // 2.4-5.6 mL/min off the condenser: a brisk bench rate (common practice: 1-2 drops a second).
+    boilupMlPerMin: 4 * spec.heat,
+  };
+}
+
+function equilibriumFor(compounds: Compound[]): StageEquilibrium {
+  try {
+    return columnEquilibrium(compounds, 'unifac');
+  } catch (error) {
+    if (error instanceof MissingUnifacDataError) return columnEquilibrium(compounds, 'ideal');
+    throw error;
+  }
+}
+
+function simulate(plan: SimulationPlan, spec: CorpusRunSpec, heat: (fullW: number) => HeatStep[], durationS: number): BatchStillRun {
+  const equilibrium = equilibriumFor(plan.compounds);
+  const components = componentDataFor(plan.compounds);
+  const chargeMol = molesFromAmounts(plan.compounds, plan.chargeMl.map((ml) => ml * 1e-6), 'volume');
+  // Heat set so the heaviest component still comes over at the boil-up: a mantle turned up
+  // enough for the whole run, as at the bench, so vapour never stops for want of heat alone.
+  const heaviest = plan.compounds.map((c) => tSatK(c, spec.pressurePa).tK).reduce((k, t, i, all) => (t > all[k]! ? i : k), 0);
+  const fullW = heatForBoilup({
+    equilibrium, components, x: plan.compounds.map((_, i) => (i === heaviest ? 1 : 0)), pressurePa: spec.pressurePa, roomK: plan.roomK,
+    boilupM3PerS: (plan.boilupMlPerMin * 1e-6) / 60, potLossWPerK: APPARATUS_DEFAULTS.lossWPerK,
+    columnLossWPerK: APPARATUS_DEFAULTS.wallLossWPerK + APPARATUS_DEFAULTS.headLossWPerK,
+  });
+  return simulateBatchStill({
+    equilibrium, components, chargeMol, pressurePa: spec.pressurePa, roomK: plan.roomK,
+    column: { stages: spec.plates, refluxRatio: plan.refluxRatio }, heat: heat(fullW), durationS, sampleIntervalS: 1,
+  });
+}
+
+/** Noise-free truth from a run, cut at endS: purity intervals, vapour, and the stalls given. */
+function truthFrom(run: BatchStillRun, plan: SimulationPlan, endS: number, stalls: TruthEvent[], extraEvents: TruthEvent[] = []): RunTruth {
+  const n = Math.min(run.trace.timeS.length, Math.floor(endS) + 1);
+  const timeS = run.trace.timeS.slice(0, n);
+  const headC = run.trace.headK.slice(0, n).map((k) => k - 273.15);
+  const a = run.annotations;
+  const cutAt = Math.min(endS, ...stalls.map((s) => s.timeS));
+  const purityIntervals: PurityInterval[] = [];
+  for (const p of a.plateaus) {
+    // The first plateau starts as the vapour arrives: its level is the steady part after the jump.
+    const startS = a.vapourArrivalS !== null && Math.abs(p.fromS - a.vapourArrivalS) < 60 ? p.fromS + 60 : p.fromS;
+    const stretch = a.vapourAtHead.find((v) => v.fromS <= p.fromS + 1 && v.toS >= p.fromS);
+    const stopS = Math.min(p.toS, stretch?.toS ?? p.toS, cutAt);
+    if (stopS - startS >= 60) purityIntervals.push({ startS, endS: stopS, component: plan.compounds[p.component]!.name });
+  }
+  const events: TruthEvent[] = [...extraEvents];
+  if (a.vapourArrivalS !== null && a.vapourArrivalS < endS) events.push({ kind: 'vapour', timeS: a.vapourArrivalS });
+  events.push(...stalls.filter((s) => s.timeS < endS));
+  return { timeS, headC, purityIntervals, events };
+}
+
+function build(spec: CorpusRunSpec): RunTruth {
+  const plan = planFor(spec);
+  const r = createRandom(spec.seed ^ 0x7a11);
+  const steady = (w: number): HeatStep[] => [{ fromS: 0, heatW: w }];
+  // Long enough for the pot to run dry at the boil-up, with the reflux taken into account.
+  const chargeMl = plan.chargeMl.reduce((a, b) => a + b, 0);
+  const durationS = Math.min(8 * 3600, 1800 + (2 * chargeMl * (plan.refluxRatio + 1)) / (plan.boilupMlPerMin / 60));
+  switch (spec.scenario) {
+    case 'slow-start': {
+      // A mantle left low: the pot barely boils for 40-60 min, then the chemist turns it up.
+      const upS = 2400 + 1200 * r.uniform();
+      const run = simulate(plan, spec, (w) => [{ fromS: 0, heatW: 0.15 * w }, { fromS: upS, heatW: w }], durationS + upS);
+      const arrival = run.annotations.vapourArrivalS;
+      const end = endBeforeDry(run, durationS + upS);
+      const slow: TruthEvent[] = arrival !== null && arrival > 900 ? [{ kind: 'stall', timeS: arrival, cause: 'slow-start' }] : [];
+      return truthFrom(run, plan, end, [], slow);
+    }
+    case 'heat-lost': {
+      const normal = simulate(plan, spec, steady, durationS);
+      const first = normal.annotations.plateaus[0];
+      if (!first) return truthFrom(normal, plan, endBeforeDry(normal, durationS), []);
+      const dry = normal.annotations.potDryS ?? durationS;
+      const offS = first.fromS + 300 + (Math.min(dry, normal.annotations.plateaus.at(-1)!.toS) - first.fromS - 600) * r.uniform();
+      const tailS = 900 + 600 * r.uniform();
+      const run = simulate(plan, spec, (w) => [{ fromS: 0, heatW: w }, { fromS: offS, heatW: 0 }], offS + tailS);
+      return truthFrom(run, plan, offS + tailS, [{ kind: 'stall', timeS: offS, cause: 'heat-lost' }]);
+    }
+    case 'pot-dry': {
+      const run = simulate(plan, spec, steady, durationS);
+      const dry = run.annotations.potDryS;
+      if (dry === null) return truthFrom(run, plan, durationS, []);
+      return truthFrom(run, plan, Math.min(durationS, dry + 900 + 600 * r.uniform()), [{ kind: 'stall', timeS: dry, cause: 'pot-dry' }]);
+    }
+    default: {
+      // 'normal', and 'creeping': a climb that never settles is not something this column model
+      // makes on demand, so those specs run as normal runs (the synthetic corpus keeps them).
+      const run = simulate(plan, spec, steady, durationS);
+      return truthFrom(run, plan, endBeforeDry(run, durationS), []);
+    }
+  }
+}
+
+// A normal run ends as the chemist stops heating, a little before the pot would run dry.
+function endBeforeDry(run: BatchStillRun, durationS: number): number {
+  const dry = run.annotations.potDryS;
+  return dry === null ? durationS : Math.max(0, dry - 120);
+}
+
+interface CachedTruth {
+  version: string;
+  purityIntervals: PurityInterval[];
+  events: TruthEvent[];
+  /** Float32 head temperatures on the 1 s grid, base64. */
+  headC: string;
+}
+
+/** The column-simulator truth source, with its disk cache. */
+export const simulatedTruthSource: TruthSource = (spec) => {
+  const key = createHash('sha1').update(VERSION + JSON.stringify(spec)).digest('hex').slice(0, 20);
+  const path = `${CACHE_DIR}/${key}.json`;
+  let truth: RunTruth;
+  if (existsSync(path)) {
+    const cached = JSON.parse(readFileSync(path, 'utf8')) as CachedTruth;
+    const buffer = Buffer.from(cached.headC, 'base64');
+    const headC = Float64Array.from(new Float32Array(buffer.buffer, buffer.byteOffset, buffer.byteLength / 4));
+    truth = { timeS: Float64Array.from(headC, (_, i) => i), headC, purityIntervals: cached.purityIntervals, events: cached.events };
+  } else {
+    truth = build(spec);
+    mkdirSync(CACHE_DIR, { recursive: true });
+    const cached: CachedTruth = { version: VERSION, purityIntervals: truth.purityIntervals, events: truth.events, headC: Buffer.from(Float32Array.from(truth.headC).buffer).toString('base64') };
+    writeFileSync(path, JSON.stringify(cached));
+  }
+  const boilingPointsC = spec.components.map((c) => tSatK(findCompound(c.name), spec.pressurePa).tK - 273.15);
+  return { truth, boilingPointsC } satisfies TruthSourceResult;
+};
