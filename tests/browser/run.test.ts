@@ -39,7 +39,10 @@ it('goes through vapour, plateau, a breakthrough alarm, receiver 2 and the end, 
   expect(await page.evaluate(() => (window as unknown as { __tones: number }).__tones)).toBeGreaterThan(0);
 
   await banner.getByRole('button', { name: 'Receiver changed → 2' }).click();
-  await expect(banner.count()).resolves.toBe(0);
+  // At 600x the next planned cut may follow within seconds: the alarm for receiver 2 is gone,
+  // and any alarm now standing is for the receiver after it.
+  await page.waitForFunction(() => !/Change to receiver 2/.test(document.querySelector('[role="alertdialog"]')?.textContent ?? ''));
+  if ((await banner.count()) > 0) expect(await banner.textContent()).toMatch(/Change to receiver 3/);
   expect((await page.getByTestId('receiver').textContent())?.startsWith('2')).toBe(true);
 
   // No alarm chatters: a kind is never said three times within a minute of real time.

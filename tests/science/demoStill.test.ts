@@ -90,3 +90,10 @@ describe('createDemoStill(options, snapshot)', () => {
     expect(resumed.step(1).timeS).toBe(1501);
   });
 });
+
+describe('createDemoStill plates', () => {
+  it('takes a plate estimate that is not whole (from packing height) by rounding it', () => {
+    expect(() => createDemoStill({ plates: 7.5 })).not.toThrow();
+    expect(() => createDemoStill({ plates: -2 })).toThrow(RangeError);
+  });
+});

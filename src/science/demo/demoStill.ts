@@ -138,7 +138,9 @@ export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStill
   const roomC = options.roomC ?? 21;
   const pressurePa = options.pressurePa ?? 101_325;
   if (!(pressurePa > 0)) throw new RangeError('pressure must be > 0 Pa');
-  const plates = options.plates ?? 4;
+  // The simulator counts whole stages; an estimate from packing height is rarely whole.
+  const plates = Math.round(options.plates ?? 4);
+  if (!(plates >= 0)) throw new RangeError('plates must be >= 0');
   const boilup = options.boilupMlPerMin ?? 4;
   if (!(boilup > 0)) throw new RangeError('boil-up must be > 0 mL/min');
   const reflux = options.refluxRatio ?? 2;
