@@ -19,6 +19,8 @@ export interface RunPlan {
   plates: number;
   /** Some result rests on an estimated property (a user compound's vapour pressure). */
   isEstimated: boolean;
+  /** The column simulator's expected head temperature through the run, drawn faintly on Watch. */
+  predicted?: { time_s: number[]; head_c: number[] };
 }
 
 /** Converts the science core's cut plan to the run's plan (degC, mL) at the edge. */

@@ -189,6 +189,11 @@ export function App({ services, updates }: AppProps) {
             column: { description: 'demo column', theoretical_plates: 4 },
             plan: toRunPlan(demoCutPlan(101_325, 4), 101_325, 4),
           };
+    if (what.plan && what.charge && what.pressurePa) {
+      // Loaded on demand: the simulator and the UNIFAC tables stay out of the first load.
+      const { withPrediction } = await import('./watch/withPrediction.ts');
+      what.plan = withPrediction(what.plan, what.charge, what.pressurePa, what.column?.theoretical_plates ?? 0);
+    }
     // Where the readings come from: the connected sensor, else the demo still.
     const source = connected
       ? sensorLiveSource(connected)

@@ -26,3 +26,5 @@ export { componentDataFor } from './componentDataFor.ts';
 export type { SimulatorComponentData } from './componentDataFor.ts';
 export { heatForBoilup } from './heatForBoilup.ts';
 export type { BoilupHeatInput } from './heatForBoilup.ts';
+export { predictHeadTrace } from './predictHeadTrace.ts';
+export type { HeadPredictionInput } from './predictHeadTrace.ts';

@@ -25,6 +25,8 @@ interface TraceChartProps {
   bands?: TemperatureBand[];
   /** Events and cuts, drawn as thin vertical lines. */
   markers?: TraceMarker[];
+  /** The simulator's expected head temperature, drawn faintly behind the readings. */
+  prediction?: { time_s: number[]; head_c: number[] } | undefined;
   height?: number;
   label: string;
   /** Least time between redraws; setData rebuilds every path. Units: ms */
@@ -41,13 +43,13 @@ function cssColour(name: string, fallback: string): string {
  * view is decimated (min/max per pixel column) so an 8-hour run at 10 readings a second draws
  * as fast as a short one.
  */
-export function TraceChart({ readings, version, windowS, bands = [], markers = [], height = 200, label, minRedrawMs = 500 }: TraceChartProps) {
+export function TraceChart({ readings, version, windowS, bands = [], markers = [], prediction, height = 200, label, minRedrawMs = 500 }: TraceChartProps) {
   const host = useRef<HTMLDivElement>(null);
   const plot = useRef<uPlot | null>(null);
   const lastDraw = useRef(0);
   const pending = useRef<number | null>(null);
-  const overlay = useRef({ bands, markers });
-  overlay.current = { bands, markers };
+  const overlay = useRef({ bands, markers, prediction });
+  overlay.current = { bands, markers, prediction };
   const scratch = useRef({ t: new Float64Array(0), h: new Float64Array(0) });
 
   useEffect(() => {
@@ -94,6 +96,28 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
               const top = u.valToPos(band.toC, 'y', true);
               const bottom = u.valToPos(band.fromC, 'y', true);
               ctx.fillRect(bbox.left, top, bbox.width, bottom - top);
+            }
+            const expected = overlay.current.prediction;
+            if (expected && expected.time_s.length > 1) {
+              const [xMin, xMax] = [u.scales.x!.min!, u.scales.x!.max!];
+              ctx.beginPath();
+              let isDrawing = false;
+              for (let i = 0; i < expected.time_s.length; i++) {
+                const t = expected.time_s[i]!;
+                if (t < xMin || t > xMax) {
+                  isDrawing = false;
+                  continue;
+                }
+                const x = u.valToPos(t, 'x', true);
+                const y = u.valToPos(expected.head_c[i]!, 'y', true);
+                if (isDrawing) ctx.lineTo(x, y);
+                else ctx.moveTo(x, y);
+                isDrawing = true;
+              }
+              ctx.strokeStyle = ink;
+              ctx.globalAlpha = 0.35;
+              ctx.lineWidth = 2 * devicePixelRatio;
+              ctx.stroke();
             }
             ctx.restore();
           },
@@ -162,7 +186,7 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
     const wait = minRedrawMs - (performance.now() - lastDraw.current);
     if (wait <= 0) draw();
     else if (pending.current === null) pending.current = window.setTimeout(draw, wait);
-  }, [readings, version, windowS, minRedrawMs, bands, markers]);
+  }, [readings, version, windowS, minRedrawMs, bands, markers, prediction]);
 
   return (
     <figure class="trace">

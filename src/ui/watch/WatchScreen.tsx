@@ -1,6 +1,6 @@
 import type { ComponentChildren } from 'preact';
 import { useState } from 'preact/hooks';
-import { headRateCPerMin } from '../../run/index.ts';
+import { headRateCPerMin, type RunPlan } from '../../run/index.ts';
 import type { RunSession } from '../../session/index.ts';
 import { TraceChart, type TemperatureBand, type TraceMarker } from '../chart/TraceChart.tsx';
 import { ConfirmDialog } from '../common/ConfirmDialog.tsx';
@@ -39,6 +39,7 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
   const headC = readings.lastValidHeadC();
   const rate = n > 1 ? headRateCPerMin(readings.timeS, readings.headC, 60) : Number.NaN;
   const windows = planWindows(header.plan);
+  const prediction = (header.plan as RunPlan | null)?.predicted;
   const receiver = session.receiver;
   const current = windows.find((w) => w.receiver === receiver);
   const nextCut = windows.find((w) => w.receiver === receiver + 1);
@@ -114,8 +115,8 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
         </div>
       )}
 
-      <TraceChart readings={readings} version={version} windowS={600} bands={bands} markers={markers} label="Last 10 minutes" />
-      <TraceChart readings={readings} version={version} bands={bands} markers={markers} height={140} label="Whole run" />
+      <TraceChart readings={readings} version={version} windowS={600} bands={bands} markers={markers} prediction={prediction} label="Last 10 minutes" />
+      <TraceChart readings={readings} version={version} bands={bands} markers={markers} prediction={prediction} height={140} label={prediction ? 'Whole run (faint line: predicted)' : 'Whole run'} />
 
       {!session.isEnded && (
         <button type="button" class="action action-end" onClick={() => setDialog('end')}>End run</button>
