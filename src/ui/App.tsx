@@ -258,6 +258,7 @@ export function App({ services, updates }: AppProps) {
             open={runView}
             onOpenChange={setRunView}
             syncStateOf={syncStateOf}
+            onAmended={(runId) => void services.outbox.queueRun(runId).catch(() => undefined)}
             onDuplicatePlan={(draft) => {
               setPrepared({
                 title: draft.title,

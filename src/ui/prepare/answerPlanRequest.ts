@@ -4,7 +4,7 @@ import {
   type Compound, type CutPlan, type PreparedMixture, type ThermoModel,
 } from '../../science/index.ts';
 import type { CompoundChoice, PlanAnswer, PlanMessage, PlanRequest, PlanResult } from './planRequest.ts';
-import { predictDistillation, predictionBasis, type PredictedSlice } from './predictDistillation.ts';
+import { predictDistillation, type PredictedSlice } from './predictDistillation.ts';
 import { headCurve, predictReceivers } from './predictReceivers.ts';
 import { tidyWindows } from './tidyWindows.ts';
 
@@ -54,7 +54,7 @@ function heavyPart(request: PlanRequest): Omit<HeavyPart, 'key'> {
     const curve = binaryTxy(mixture, pressurePa, 51);
     binary = { names: [compounds[0]!.name, compounds[1]!.name], x: Array.from(curve.x), y: Array.from(curve.y), tC: Array.from(curve.tK, (t) => t - 273.15) };
   }
-  const slices = predictDistillation({ mixture, x, chargeMol, pressurePa, plates });
+  const { slices, basis: predictionBasis } = predictDistillation({ compounds, model, mixture, x, chargeMol, pressurePa, plates });
   const plannedWindows = tidyWindows(toRunPlan(cutPlan, pressurePa, plates).windows);
   const moleShareLeft = 1 - slices.reduce((s, slice) => s + slice.moles.reduce((a, n) => a + n, 0), 0) / chargeMol;
   return {

@@ -15,11 +15,13 @@ export interface RunsAreaProps {
   onOpenChange(open: RunView): void;
   syncStateOf?: (runId: string) => string | undefined;
   onDuplicatePlan?: (draft: RunDraft) => void;
+  /** A finished run's fractions or notes changed: the lab's copy needs the new revision. */
+  onAmended?: (runId: string) => void;
   files?: FileActions;
 }
 
 /** The Runs tab: the list, and a run's Fractions and Report screens. Loaded on demand. */
-export function RunsArea({ store, open, onOpenChange, syncStateOf, onDuplicatePlan, files = browserFileActions() }: RunsAreaProps) {
+export function RunsArea({ store, open, onOpenChange, syncStateOf, onDuplicatePlan, onAmended, files = browserFileActions() }: RunsAreaProps) {
   const [run, setRun] = useState<RunRecord | null>(null);
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {
@@ -38,10 +40,12 @@ export function RunsArea({ store, open, onOpenChange, syncStateOf, onDuplicatePl
   const saveFractions = async (fractions: RunFractions) => {
     const header = await editFinishedRun(store, run.id, { fractions });
     setRun({ ...run, ...header });
+    onAmended?.(run.id);
   };
   const addNote = async (text: string) => {
     const header = await editFinishedRun(store, run.id, { addNote: text });
     setRun({ ...run, ...header });
+    onAmended?.(run.id);
   };
   return open.view === 'fractions'
     ? <FractionsScreen run={run} onSave={saveFractions} onAddNote={addNote} onOpenReport={() => onOpenChange({ runId: run.id, view: 'report' })} onBack={() => onOpenChange(null)} />
