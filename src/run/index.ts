@@ -19,3 +19,4 @@ export type { TraceImport } from './traceImport.ts';
 export { parseRunRecordJson, runRecordToJson, RunFileError } from './runFile.ts';
 export { duplicatePlan } from './duplicatePlan.ts';
 export type { RunDraft } from './duplicatePlan.ts';
+export type { LabRunItem } from './labRunItem.ts';

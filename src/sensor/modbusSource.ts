@@ -6,7 +6,8 @@ import { invalidReading, toReading } from './protocols/reading.ts';
 import { toCelsius, type TemperatureUnit } from './protocols/units.ts';
 import { ReadingHub } from './readingHub.ts';
 import type { ReadingSource, RunClock } from './readingSource.ts';
-import { pause, ReplyWaiter } from './replyWaiter.ts';
+import { polledSource } from './polledSource.ts';
+import { ReplyWaiter } from './replyWaiter.ts';
 import { SerialLink } from './serialLink.ts';
 import { checkBaudRate, type SerialLike, type SerialPortLike } from './serialTypes.ts';
 
@@ -47,7 +48,6 @@ export function createModbusSource(options: ModbusSourceOptions): ReadingSource 
   // A reply is at most 5 + 2 x 125 bytes; anything beyond is noise and is dropped.
   const buffer = new Uint8Array(256);
   let length = 0;
-  let running = false;
 
   const link = new SerialLink({
     serial: options.serial,
@@ -71,7 +71,7 @@ export function createModbusSource(options: ModbusSourceOptions): ReadingSource 
     },
   });
 
-  async function pollOnce(): Promise<void> {
+  async function pollOnce(isRunning: () => boolean): Promise<void> {
     length = 0;
     const reply = waiter.wait(timeoutS);
     try {
@@ -81,7 +81,7 @@ export function createModbusSource(options: ModbusSourceOptions): ReadingSource 
       return; // lost; the link reports it and reconnects
     }
     const answer = await reply;
-    if (!running) return;
+    if (!isRunning()) return;
     if (!answer) {
       hub.emit(invalidReading(options.clock(), `no reply from Modbus address ${read.address} within ${timeoutS} s`));
       return;
@@ -102,32 +102,5 @@ export function createModbusSource(options: ModbusSourceOptions): ReadingSource 
     }
   }
 
-  async function loop(): Promise<void> {
-    while (running) {
-      if (link.isConnected) await pollOnce();
-      if (running) await pause(intervalS, () => !running);
-    }
-  }
-
-  return {
-    label: 'Modbus RTU',
-    get status() {
-      return hub.status;
-    },
-    async start(signal) {
-      await link.start(signal);
-      running = true;
-      signal?.addEventListener('abort', () => (running = false), { once: true });
-      void loop();
-    },
-    async stop() {
-      running = false;
-      waiter.cancel();
-      await link.stop();
-      hub.endAll();
-    },
-    onReading: (listener) => hub.onReading(listener),
-    onStatus: (listener) => hub.onStatus(listener),
-    readings: (signal) => hub.iterate(signal),
-  };
+  return polledSource({ label: 'Modbus RTU', link, hub, waiter, intervalS, pollOnce });
 }

@@ -4,7 +4,8 @@ import { parseReply, queryBytes, type QueryTerminator } from './protocols/pollin
 import { invalidReading, toReading } from './protocols/reading.ts';
 import { ReadingHub } from './readingHub.ts';
 import type { ReadingSource, RunClock } from './readingSource.ts';
-import { pause, ReplyWaiter } from './replyWaiter.ts';
+import { polledSource } from './polledSource.ts';
+import { ReplyWaiter } from './replyWaiter.ts';
 import { SerialLink } from './serialLink.ts';
 import { checkBaudRate, type SerialLike, type SerialPortLike } from './serialTypes.ts';
 
@@ -38,7 +39,6 @@ export function createPollingSource(options: PollingSourceOptions): ReadingSourc
   const waiter = new ReplyWaiter<{ line: string; timeS: number }>();
   const makeSplitter = () => createLineSplitter({ lineEnding: options.lineEnding ?? 'any' });
   let splitter = makeSplitter();
-  let running = false;
 
   const link = new SerialLink({
     serial: options.serial,
@@ -60,7 +60,7 @@ export function createPollingSource(options: PollingSourceOptions): ReadingSourc
     },
   });
 
-  async function pollOnce(): Promise<void> {
+  async function pollOnce(isRunning: () => boolean): Promise<void> {
     const reply = waiter.wait(timeoutS);
     try {
       await link.write(query);
@@ -69,7 +69,7 @@ export function createPollingSource(options: PollingSourceOptions): ReadingSourc
       return;
     }
     const answer = await reply;
-    if (!running) return;
+    if (!isRunning()) return;
     if (!answer) {
       hub.emit(invalidReading(options.clock(), `no answer to "${options.query}" within ${timeoutS} s`));
       return;
@@ -78,32 +78,5 @@ export function createPollingSource(options: PollingSourceOptions): ReadingSourc
     hub.emit(toReading(answer.timeS, parseReply(answer.line, options.query, options.format), answer.line));
   }
 
-  async function loop(): Promise<void> {
-    while (running) {
-      if (link.isConnected) await pollOnce();
-      if (running) await pause(intervalS, () => !running);
-    }
-  }
-
-  return {
-    label: 'Serial instrument (query and reply)',
-    get status() {
-      return hub.status;
-    },
-    async start(signal) {
-      await link.start(signal);
-      running = true;
-      signal?.addEventListener('abort', () => (running = false), { once: true });
-      void loop();
-    },
-    async stop() {
-      running = false;
-      waiter.cancel();
-      await link.stop();
-      hub.endAll();
-    },
-    onReading: (listener) => hub.onReading(listener),
-    onStatus: (listener) => hub.onStatus(listener),
-    readings: (signal) => hub.iterate(signal),
-  };
+  return polledSource({ label: 'Serial instrument (query and reply)', link, hub, waiter, intervalS, pollOnce });
 }

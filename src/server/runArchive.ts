@@ -1,24 +1,12 @@
 import { createHash } from 'node:crypto';
 import type { LabDatabase } from './labDatabase.ts';
+import type { LabRunItem } from '../run/index.ts';
 import type { RunSummaryFields } from './validateRunRecord.ts';
 
 export type PutOutcome = 'stored' | 'already-stored' | 'conflict';
 
-export interface RunListItem {
-  id: string;
-  /** The newest revision, the one shown. */
-  revision: number;
-  revisions: number;
-  title: string;
-  startedAt: string;
-  endedAt: string | null;
-  device: string;
-  components: string[];
-  readingCount: number;
-  /** Label of the token (phone) that sent the newest revision. */
-  uploadedBy: string;
-  receivedAt: string;
-}
+/** The list's row, as the phone reads it (src/run/labRunItem.ts). */
+export type RunListItem = LabRunItem;
 
 export interface RunListQuery {
   /** Inclusive lower bound on the start time (ISO 8601). */

@@ -1,19 +1,7 @@
+import type { LabRunItem } from '../run/index.ts';
 import type { SyncTarget } from './syncStatus.ts';
 
-/** One run in the lab's list, at its newest revision (the server's GET /api/runs). */
-export interface LabRunItem {
-  id: string;
-  revision: number;
-  revisions: number;
-  title: string;
-  startedAt: string;
-  endedAt: string | null;
-  device: string;
-  components: string[];
-  readingCount: number;
-  uploadedBy: string;
-  receivedAt: string;
-}
+export type { LabRunItem };
 
 export interface LabRunQuery {
   /** YYYY-MM-DD (UTC day) or ISO time; `to` is inclusive for days. */

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launchChromium, phoneContext } from './support/browser.ts';
+import { launchChromium, phoneContext, untilServiceWorkerControls } from './support/browser.ts';
 import { startDemoRun } from './support/demoRun.ts';
 
 let browser: Browser;
@@ -15,12 +15,7 @@ it('starts and runs the simulated run with no network once the service worker co
   const context = await phoneContext(browser);
   const page = await context.newPage();
   await page.goto(inject('baseUrl'));
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-  });
-  // The first load is not yet controlled; a reload is.
-  await page.reload();
-  await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
+  await untilServiceWorkerControls(page);
 
   await context.setOffline(true);
   await page.reload();

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launchChromium, phoneContext } from './support/browser.ts';
+import { launchChromium, phoneContext, untilServiceWorkerControls } from './support/browser.ts';
 import { recordAlertsScript, startDemoRun } from './support/demoRun.ts';
 
 let browser: Browser;
@@ -18,11 +18,7 @@ it('goes through vapour, plateau, a breakthrough alarm, receiver 2 and the end, 
   await context.addInitScript(recordAlertsScript);
   const page = await context.newPage();
   await page.goto(inject('baseUrl'));
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-  });
-  await page.reload();
-  await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
+  await untilServiceWorkerControls(page);
   await context.setOffline(true);
   await page.reload();
 

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launchChromium, phoneContext } from './support/browser.ts';
+import { launchChromium, phoneContext, untilServiceWorkerControls } from './support/browser.ts';
 import { startDemoRun } from './support/demoRun.ts';
 
 let browser: Browser;
@@ -16,11 +16,7 @@ it('a run finished offline is sent to the lab server when the network returns an
   const page = await context.newPage();
   // The set-up link the server prints: the app and the server share one address.
   await page.goto(`${inject('baseUrl')}#sync=${encodeURIComponent(inject('syncToken'))}`);
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-  });
-  await page.reload();
-  await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
+  await untilServiceWorkerControls(page);
   expect(new URL(page.url()).hash).toBe('');
 
   await context.setOffline(true);
