@@ -200,7 +200,7 @@ export function App({ services, updates }: AppProps) {
       : makeDemoSource(settings.demoSpeed, undefined, prepared ? { pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates ?? 4 } : {});
     const sourceInfo = connected
       ? { kind: connected.setup.kind, label: connected.bridge.label }
-      : { kind: 'simulated', label: prepared ? 'Simulated run (demo still, not your apparatus)' : 'Simulated run (demo)' };
+      : { kind: 'simulated', label: prepared ? 'Simulated still (not your apparatus)' : 'Simulated still' };
     try {
       const started = await RunSession.start(
         services.sessionDeps,

@@ -25,7 +25,7 @@ export interface SimulatedSourceOptions {
  */
 export class SimulatedSource {
   readonly kind = 'simulated';
-  readonly label = 'Simulated run (demo)';
+  readonly label = 'Simulated still';
   #still: DemoStill;
   #clock: Clock;
   #speed: number;
