@@ -4,6 +4,7 @@
  * have its type. The first problem found is reported with the field's path, e.g.
  * `readings.head_c[12]`, so the phone and the lab can see what is wrong.
  */
+import type { LabRunItem } from '../run/index.ts';
 export class RecordError extends Error {
   readonly field: string;
   constructor(field: string, problem: string) {
@@ -57,15 +58,8 @@ const chargeUnits = new Set(['mL', 'g', 'mol', '%']);
 /** Run ids travel in URLs: keep them to plain characters. */
 const runIdPattern = /^[A-Za-z0-9._-]{1,100}$/;
 
-export interface RunSummaryFields {
-  id: string;
-  title: string;
-  startedAt: string;
-  endedAt: string | null;
-  device: string;
-  components: string[];
-  readingCount: number;
-}
+/** What the archive indexes from a record: the lab's list row less the archive's own fields. */
+export type RunSummaryFields = Omit<LabRunItem, 'revision' | 'revisions' | 'uploadedBy' | 'receivedAt'>;
 
 /** Validates a parsed body; returns the fields the archive indexes. Throws RecordError. */
 export function validateRunRecord(body: unknown): RunSummaryFields {

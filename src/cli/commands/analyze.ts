@@ -1,5 +1,6 @@
 import { parseTraceCsv, TraceCsvError } from '../../run/traceCsv.ts';
-import { analyzeReadings, parseCutPlan, type CutWindow, type WatchEvent } from '../../signal/index.ts';
+import { analyzeReadings, type CutWindow, type WatchEvent } from '../../signal/index.ts';
+import { readPlanFile } from '../readPlanFile.ts';
 import { parseArgs } from '../args.ts';
 import { UsageError, type Command, type CommandIo } from '../command.ts';
 
@@ -28,7 +29,7 @@ export const analyze: Command = {
     const parsed = parseArgs(args, { values: ['plan'], flags: ['json'] });
     if (parsed.positional.length === 0) throw new UsageError('give at least one trace CSV file (see --help)');
     const planPath = parsed.options.get('plan');
-    const plan = planPath === undefined ? [] : await readPlan(planPath, io);
+    const plan = planPath === undefined ? [] : await readPlanFile(planPath, io);
     const isJson = parsed.options.has('json');
     if (!isJson) io.out(tableRow(['file', 'time', 'event', 'head_c', 'receiver', 'action']));
     let failures = 0;
@@ -43,20 +44,6 @@ export const analyze: Command = {
     return failures > 0 ? 1 : 0;
   },
 };
-
-async function readPlan(path: string, io: CommandIo): Promise<CutWindow[]> {
-  let text: string;
-  try {
-    text = await io.readFile(path);
-  } catch (error) {
-    throw new UsageError(`cannot read plan ${path}: ${error instanceof Error ? error.message : String(error)}`);
-  }
-  try {
-    return parseCutPlan(text);
-  } catch (error) {
-    throw new UsageError(`${path}: ${error instanceof Error ? error.message : String(error)}`);
-  }
-}
 
 async function analyzeFile(file: string, plan: CutWindow[], io: CommandIo): Promise<WatchEvent[] | null> {
   let text: string;

@@ -6,7 +6,7 @@ import {
   parseVolumeM3, planCuts, simulateBatchStill, type BatchStillRun, type Compound,
 } from '../../science/index.ts';
 import { interpolateSorted, sensorReadings } from '../../science/sensorModel/index.ts';
-import { parseCutPlan } from '../../signal/index.ts';
+import { readPlanFile } from '../readPlanFile.ts';
 import { writeTraceCsv } from '../../run/traceCsv.ts';
 import { labPressure, parseBasis, parseMix, parseModel, round } from './scienceOptions.ts';
 import { parseDurationS, parseHeatW, parseRateM3PerS, parseSensor } from './simulateOptions.ts';
@@ -105,17 +105,7 @@ interface Window { receiver: number; fromC: number; toC: number; compound: strin
 
 async function windowsFor(path: string | undefined, io: CommandIo, plan: () => ReturnType<typeof planCuts>['fractions']): Promise<Window[]> {
   if (path === undefined) return plan().map((f) => ({ receiver: f.receiver, fromC: f.fromTK - 273.15, toC: f.toTK - 273.15, compound: f.compound }));
-  let text: string;
-  try {
-    text = await io.readFile(path);
-  } catch (error) {
-    throw new UsageError(`cannot read plan ${path}: ${error instanceof Error ? error.message : String(error)}`);
-  }
-  try {
-    return parseCutPlan(text).map((w) => ({ ...w, compound: null }));
-  } catch (error) {
-    throw new UsageError(`plan ${path}: ${error instanceof Error ? error.message : String(error)}`);
-  }
+  return (await readPlanFile(path, io)).map((w) => ({ ...w, compound: null }));
 }
 
 function heatInput(options: Map<string, string>, boil: Omit<Parameters<typeof heatForBoilup>[0], 'boilupM3PerS' | 'potLossWPerK' | 'columnLossWPerK'>): number {
