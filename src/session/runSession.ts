@@ -3,7 +3,7 @@ import type { Clock } from '../sensor/clock.ts';
 import { AlarmBook, ReadingBuffer, createRunHeader, currentReceiver, type Alarm, type AlarmBookState, type NewRun, type RunHeader } from '../run/index.ts';
 import { RunJournal, type KeyValueStore } from '../store/index.ts';
 import { sensorSilentWording, wordEvent } from './alarmWording.ts';
-import type { LiveSource, RunWatcher, SessionReading, WatcherEvent } from './types.ts';
+import type { AlarmThresholds, LiveSource, RunWatcher, SessionReading, WatcherEvent } from './types.ts';
 
 export interface SessionDeps {
   store: KeyValueStore;
@@ -12,7 +12,8 @@ export interface SessionDeps {
   wallMs(): number;
   alerter: Alerter | null;
   wakeLock: ScreenWakeLock | null;
-  createWatcher(plan: unknown, saved?: unknown): RunWatcher;
+  /** A new watcher for the plan (with the chemist's thresholds), or the saved one resumed. */
+  createWatcher(plan: unknown, saved?: unknown, thresholds?: AlarmThresholds): RunWatcher;
   /** Told how long each journal flush took (for User Timing in the browser, read by bench/). */
   onFlushTimed?(startMs: number, durationMs: number, readings: number): void;
 }
@@ -70,11 +71,17 @@ export class RunSession {
     this.#lastReadingWallMs = deps.wallMs();
   }
 
-  /** Heat on: a new run starts journalling at once. */
-  static async start(deps: SessionDeps, run: Omit<NewRun, 'startedAt'>, source: LiveSource, timings = defaultTimings): Promise<RunSession> {
+  /** Heat on: a new run starts journalling at once. Thresholds absent: the watcher's defaults. */
+  static async start(
+    deps: SessionDeps,
+    run: Omit<NewRun, 'startedAt'>,
+    source: LiveSource,
+    timings = defaultTimings,
+    thresholds?: AlarmThresholds,
+  ): Promise<RunSession> {
     const header = createRunHeader({ ...run, startedAt: new Date(deps.wallMs()).toISOString() });
     const journal = await RunJournal.start(deps.store, header, deps.wallMs());
-    const session = new RunSession(deps, timings, header, journal, deps.createWatcher(header.plan), new AlarmBook({ repeatMs: timings.alarmRepeatMs }));
+    const session = new RunSession(deps, timings, header, journal, deps.createWatcher(header.plan, undefined, thresholds), new AlarmBook({ repeatMs: timings.alarmRepeatMs }));
     session.#attach(source);
     await deps.wakeLock?.keepOn();
     return session;

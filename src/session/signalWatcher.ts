@@ -1,5 +1,5 @@
-import { RunWatcher as Detector, type CutWindow } from '../signal/index.ts';
-import type { RunWatcher, WatcherEvent } from './types.ts';
+import { RunWatcher as Detector, type CutWindow, type WatcherOptions } from '../signal/index.ts';
+import type { AlarmThresholds, RunWatcher, WatcherEvent } from './types.ts';
 
 /** Receiver windows from a run's plan (`plan.windows`), or none. */
 export function planCutWindows(plan: unknown): CutWindow[] {
@@ -10,9 +10,23 @@ export function planCutWindows(plan: unknown): CutWindow[] {
   );
 }
 
+/**
+ * The chemist's thresholds as detector options. The CUSUM reference is half the rise worth
+ * detecting (signal/README.md), so it follows the breakthrough rise.
+ */
+export function watcherOptionsFor(thresholds: AlarmThresholds): Partial<WatcherOptions> {
+  return {
+    breakthroughMinRiseC: thresholds.breakthroughRiseC,
+    breakthroughReferenceC: thresholds.breakthroughRiseC / 2,
+    noVapourStallS: thresholds.noVapourS,
+    fallAwayC: thresholds.fallAwayC,
+  };
+}
+
 /** The signal layer's detector behind the live run's watcher interface; its state saves as JSON text. */
-export function createSignalWatcher(plan: unknown, saved?: unknown): RunWatcher {
-  const detector = typeof saved === 'string' ? Detector.restore(saved) : new Detector({}, planCutWindows(plan));
+export function createSignalWatcher(plan: unknown, saved?: unknown, thresholds?: AlarmThresholds): RunWatcher {
+  const detector =
+    typeof saved === 'string' ? Detector.restore(saved) : new Detector(thresholds ? watcherOptionsFor(thresholds) : {}, planCutWindows(plan));
   return {
     push(timeS, headC) {
       return detector.push(timeS, headC).map(

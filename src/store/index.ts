@@ -5,7 +5,7 @@ export { RunJournal, loadRun, activeRunKey, chunkKey, manifestKey } from './runJ
 export type { JournalManifest, RestoredRun } from './runJournal.ts';
 export { checkStorage } from './storageHealth.ts';
 export type { StorageHealth, StorageLike } from './storageHealth.ts';
-export { defaultSettings, loadSettings, saveSettings, pressureUnitSettings } from './settings.ts';
+export { defaultSettings, loadSettings, saveSettings, pressureUnitSettings, readingReminderChoicesS, reminderWords } from './settings.ts';
 export type { Settings, TemperatureUnitSetting, PressureUnitSetting, DecimalSeparatorSetting } from './settings.ts';
 export { listSavedRuns, loadRunRecord, saveFinishedRun, editFinishedRun, removeRun, restoreRun, RunIdTakenError } from './savedRuns.ts';
 export type { ImportOutcome, RemovedRun, SavedRunSummary } from './savedRuns.ts';

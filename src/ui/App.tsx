@@ -1,9 +1,9 @@
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import { toRunPlan, type RunHeader, type RunPlan } from '../run/index.ts';
 import { findCompound, type Compound } from '../science/index.ts';
 import { createDemoStill, demoCutPlan, demoMixture, type DemoStillSnapshot } from '../science/demo/index.ts';
 import { SimulatedSource } from '../sensor/simulated/simulatedSource.ts';
-import { RunSession, defaultTimings, type LiveSource, type SessionTimings } from '../session/index.ts';
+import { RunSession, defaultTimings, type AlarmThresholds, type LiveSource, type SessionTimings } from '../session/index.ts';
 import { defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
 import { queueEndedRuns, readSyncLink, startSyncTriggers } from '../sync/index.ts';
 import { AlarmBanner } from './alarm/AlarmBanner.tsx';
@@ -25,6 +25,7 @@ import type { UpdateService } from './update/pwaUpdate.ts';
 import { UpdateNotice } from './update/UpdateNotice.tsx';
 import { useSessionVersion } from './useSession.ts';
 import { formatElapsed } from './watch/format.ts';
+import { figuresForSettings } from './units/index.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
 // Runs, Fractions, Report (loaded on demand).
 import { LazyRunsArea } from './runs/LazyRunsArea.tsx';
@@ -49,9 +50,19 @@ function knownCompounds(names: string[]): Compound[] {
   });
 }
 
-/** The chemist's alarm repeat and snooze settings as the live run's timings. */
+/** The chemist's alarm repeat, snooze and sensor-silence settings as the live run's timings. */
 function timingsFor(settings: Settings): SessionTimings {
-  return { ...defaultTimings, alarmRepeatMs: settings.alarmRepeatS * 1000, snoozeMs: settings.snoozeMin * 60_000 };
+  return {
+    ...defaultTimings,
+    alarmRepeatMs: settings.alarmRepeatS * 1000,
+    snoozeMs: settings.snoozeMin * 60_000,
+    sensorSilenceMs: settings.sensorSilenceS * 1000,
+  };
+}
+
+/** The chemist's alarm thresholds for the run watcher. */
+function thresholdsFor(settings: Settings): AlarmThresholds {
+  return { breakthroughRiseC: settings.breakthroughRiseC, noVapourS: settings.noVapourMin * 60, fallAwayC: settings.fallAwayC };
 }
 
 function applySettings(services: AppServices, settings: Settings): void {
@@ -66,6 +77,7 @@ export function App({ services, updates }: AppProps) {
   const [session, setSession] = useState<RunSession | null>(null);
   const [ended, setEnded] = useState<RunHeader | null>(null);
   const [settings, setSettings] = useState<Settings>(defaultSettings);
+  const figures = useMemo(() => figuresForSettings(settings), [settings.temperatureUnit, settings.pressureUnit, settings.decimalSeparator]);
   const [isUpdateReady, setUpdateReady] = useState(false);
   const [isOfflineReady, setOfflineReady] = useState(false);
   const [backgroundNotice, setBackgroundNotice] = useState<string | null>(null);
@@ -207,6 +219,7 @@ export function App({ services, updates }: AppProps) {
         { id: `run-${Date.now().toString(36)}`, device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser', source: sourceInfo, ...what },
         source,
         timingsFor(settings),
+        thresholdsFor(settings),
       );
       setSensor(null);
       setRestoredSensor(null);
@@ -255,6 +268,7 @@ export function App({ services, updates }: AppProps) {
         {screen === 'runs' && (
           <LazyRunsArea
             store={services.store}
+            figures={figures}
             open={runView}
             onOpenChange={setRunView}
             syncStateOf={syncStateOf}
@@ -267,7 +281,7 @@ export function App({ services, updates }: AppProps) {
                 pressurePa: draft.pressurePa ?? 101_325,
                 column: { description: draft.column?.description ?? 'as before', theoretical_plates: draft.column?.theoretical_plates ?? 0 },
                 heat: '',
-                extraChecks: extraChecksFor(knownCompounds(draft.charge.map((c) => c.name)), null, (tC) => `${tC.toFixed(0)} °C`),
+                extraChecks: extraChecksFor(knownCompounds(draft.charge.map((c) => c.name)), null, (tC) => figures.temperature(tC, 0)),
               });
               setScreen('watch');
               setStage('idle');
@@ -314,6 +328,7 @@ export function App({ services, updates }: AppProps) {
         )}
         {screen === 'watch' && stage === 'connect' && (
           <LazyConnectSensor
+            typedDefaults={{ unit: settings.temperatureUnit === 'degF' ? 'F' : 'C', reminderEveryS: settings.readingReminderS }}
             onConnected={(connected) => {
               setSensor(connected);
               setStage('checklist');
@@ -338,6 +353,7 @@ export function App({ services, updates }: AppProps) {
         {screen === 'watch' && (stage === 'running' || stage === 'ended') && session && (
           <WatchScreen
             session={session}
+            figures={figures}
             backgroundNotice={backgroundNotice}
             onDismissBackgroundNotice={() => setBackgroundNotice(null)}
             onEnded={() => {
@@ -348,6 +364,7 @@ export function App({ services, updates }: AppProps) {
             sensorPanel={
               <SensorPanel
                 session={session}
+                decimalMark={figures.style.decimalMark}
                 restoredSetup={restoredSensor}
                 onRestoredReconnected={() => setRestoredSensor(null)}
                 onReminder={() => services.alerter.channels.tone.play('reminder')}

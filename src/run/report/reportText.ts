@@ -1,6 +1,7 @@
+import { figuresFor, type Figures } from '../../science/index.ts';
 import type { RunRecord } from '../runRecord.ts';
 import type { RunReport } from './buildRunReport.ts';
-import { plateMethod } from './runPlates.ts';
+import { plateMethod, type PlateEstimate } from './runPlates.ts';
 import { runTimeline } from './runTimeline.ts';
 
 /** Seconds as h:mm:ss (or m:ss under an hour). */
@@ -12,24 +13,41 @@ export function clockTime(seconds: number): string {
   return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${rest}` : `${m}:${rest}`;
 }
 
-const percent = (f: number | null | undefined) => (f == null || !Number.isFinite(f) ? '—' : `${(100 * f).toFixed(1)} %`);
-const grams = (kg: number | null | undefined) => (kg == null || !Number.isFinite(kg) ? '—' : `${(kg * 1000).toFixed(2)} g`);
-const millilitres = (m3: number | null | undefined) => (m3 == null || !Number.isFinite(m3) ? '—' : `${(m3 * 1e6).toFixed(1)} mL`);
-const degrees = (c: number) => (Number.isFinite(c) ? `${c.toFixed(1)} °C` : '—');
-
 /** Composition in words: "ethyl acetate 97.0 %, n-butyl acetate 3.0 % (mol)". */
-export function compositionWords(names: readonly string[], fractions: readonly number[] | null | undefined, basis: string): string {
+export function compositionWords(names: readonly string[], fractions: readonly number[] | null | undefined, basis: string, figures: Figures = figuresFor()): string {
   if (!fractions) return '—';
-  return `${names.map((n, i) => `${n} ${percent(fractions[i])}`).join(', ')} (${basis})`;
+  return `${names.map((n, i) => `${n} ${figures.percent(fractions[i])}`).join(', ')} (${basis})`;
 }
 
-/** The report as plain text a chemist can paste into a lab notebook or share. */
-export function reportText(run: RunRecord, report: RunReport): string {
+/** The charge as written: "ethyl acetate 30 mL, n-butyl acetate 30 mL". */
+export function chargeWords(run: Pick<RunRecord, 'charge'>, figures: Figures = figuresFor()): string {
+  return run.charge.map((c) => `${c.name} ${String(c.amount).replace('.', figures.style.decimalMark)} ${c.unit}`).join(', ') || 'not recorded';
+}
+
+/** The column as written, with the plates planned. */
+export function columnWords(run: Pick<RunRecord, 'column'>): string {
+  return run.column ? `${run.column.description}${run.column.theoretical_plates != null ? `, ${run.column.theoretical_plates} plates planned` : ''}` : 'not recorded';
+}
+
+/** "3.2 theoretical plates (4.2 stages with the pot), from receiver 1: xD 0.970, xW 0.310, α 2.40; HETP 7.8 cm". */
+export function plateWords(p: PlateEstimate, figures: Figures = figuresFor()): string {
+  const n = figures.number;
+  const hetp = p.hetpM !== null ? `; HETP ${n(p.hetpM * 100, 1)} cm` : '';
+  return `${n(p.plates, 1)} theoretical plates (${n(p.stages, 1)} stages with the pot), from receiver ${p.receiver}: xD ${n(p.distillateLight, 3)}, xW ${n(p.potLight, 3)}, α ${n(p.alpha, 2)}${hetp}`;
+}
+
+/**
+ * The report as plain text a chemist can paste into a lab notebook or share, with figures in
+ * the reader's units (degC, kPa and a decimal point unless told otherwise).
+ */
+export function reportText(run: RunRecord, report: RunReport, figures: Figures = figuresFor()): string {
+  const { percent, grams, millilitres } = figures;
+  const degrees = (c: number) => figures.temperature(c);
   const lines: string[] = [];
   lines.push(`${run.title}`, `Run ${run.id}, started ${run.started_at}${run.ended_at ? `, ended ${run.ended_at}` : ''}`);
-  lines.push(`Charge: ${run.charge.map((c) => `${c.name} ${c.amount} ${c.unit}`).join(', ') || 'not recorded'}`);
-  lines.push(`Pressure: ${(report.pressurePa / 1000).toFixed(2)} kPa${run.pressure_pa == null ? ' (assumed)' : ''}`);
-  lines.push(`Column: ${run.column ? `${run.column.description}${run.column.theoretical_plates != null ? `, ${run.column.theoretical_plates} plates planned` : ''}` : 'not recorded'}`);
+  lines.push(`Charge: ${chargeWords(run, figures)}`);
+  lines.push(`Pressure: ${figures.pressure(report.pressurePa)}${run.pressure_pa == null ? ' (assumed)' : ''}`);
+  lines.push(`Column: ${columnWords(run)}`);
   lines.push(`Source: ${run.source.label}`);
   lines.push(`Heat: ${run.heat_changes.length === 0 ? 'no changes recorded' : run.heat_changes.map((h) => `${clockTime(h.time_s)} ${h.text}`).join('; ')}`);
   lines.push('', 'Timeline:');
@@ -37,8 +55,8 @@ export function reportText(run: RunRecord, report: RunReport): string {
   lines.push('', 'Fractions:');
   for (const r of report.rows) {
     lines.push(`  Receiver ${r.receiver}: ${degrees(r.minHeadC)} to ${degrees(r.maxHeadC)}, ${clockTime(r.fromS)} to ${clockTime(r.toS)}; ${millilitres(r.volumeM3)}, ${grams(r.massKg)}`);
-    if (r.measured) lines.push(`    analysis: ${compositionWords(report.components, r.measured.mass, 'mass')}; ${r.measuredBy}`);
-    if (r.estimated) lines.push(`    from head temperature: ${compositionWords(report.components, r.estimated.mass, 'mass')}`);
+    if (r.measured) lines.push(`    analysis: ${compositionWords(report.components, r.measured.mass, 'mass', figures)}; ${r.measuredBy}`);
+    if (r.estimated) lines.push(`    from head temperature: ${compositionWords(report.components, r.estimated.mass, 'mass', figures)}`);
     if (r.mainComponent) lines.push(`    purity: ${r.mainComponent} ${percent(r.purityMass)} by mass (${r.purityBasis})`);
     for (const w of r.warnings) lines.push(`    note: ${w}`);
   }
@@ -55,7 +73,7 @@ export function reportText(run: RunRecord, report: RunReport): string {
   if ('reason' in report.plates) lines.push(`Plates: not estimated (${report.plates.reason})`);
   else {
     const p = report.plates;
-    lines.push(`Plates: ${p.plates.toFixed(1)} theoretical plates (${p.stages.toFixed(1)} stages with the pot), from receiver ${p.receiver}: xD ${p.distillateLight.toFixed(3)}, xW ${p.potLight.toFixed(3)}, α ${p.alpha.toFixed(2)}${p.hetpM !== null ? `; HETP ${(p.hetpM * 100).toFixed(1)} cm` : ''}`);
+    lines.push(`Plates: ${plateWords(p, figures)}`);
     lines.push(`  Method: ${plateMethod}`);
   }
   if (report.problems.length > 0) lines.push('', ...report.problems.map((p) => `Note: ${p}`));

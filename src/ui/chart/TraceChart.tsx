@@ -2,6 +2,7 @@ import { useEffect, useRef } from 'preact/hooks';
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 import { downsampleMinMax, type ReadingBuffer } from '../../run/index.ts';
+import { temperatureScaleLabel, toTemperatureScale, type TemperatureScale } from '../../science/index.ts';
 import { nanGaps } from './nanGaps.ts';
 
 export interface TemperatureBand {
@@ -29,6 +30,8 @@ interface TraceChartProps {
   prediction?: { time_s: number[]; head_c: number[] } | undefined;
   height?: number;
   label: string;
+  /** The chemist's temperature scale; readings, bands and prediction are degC and drawn on it. */
+  scale?: TemperatureScale;
   /** Least time between redraws; setData rebuilds every path. Units: ms */
   minRedrawMs?: number;
 }
@@ -43,14 +46,14 @@ function cssColour(name: string, fallback: string): string {
  * view is decimated (min/max per pixel column) so an 8-hour run at 10 readings a second draws
  * as fast as a short one.
  */
-export function TraceChart({ readings, version, windowS, bands = [], markers = [], prediction, height = 200, label, minRedrawMs = 500 }: TraceChartProps) {
+export function TraceChart({ readings, version, windowS, bands = [], markers = [], prediction, height = 200, label, scale = 'degC', minRedrawMs = 500 }: TraceChartProps) {
   const host = useRef<HTMLDivElement>(null);
   const plot = useRef<uPlot | null>(null);
   const lastDraw = useRef(0);
   const pending = useRef<number | null>(null);
-  const overlay = useRef({ bands, markers, prediction });
-  overlay.current = { bands, markers, prediction };
-  const scratch = useRef({ t: new Float64Array(0), h: new Float64Array(0) });
+  const overlay = useRef({ bands, markers, prediction, scale });
+  overlay.current = { bands, markers, prediction, scale };
+  const scratch = useRef({ t: new Float64Array(0), h: new Float64Array(0), shown: new Float64Array(0) });
 
   useEffect(() => {
     const element = host.current;
@@ -59,6 +62,7 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
     const grid = cssColour('--grid', '#8884');
     const bandFill = cssColour('--band', '#0b728522');
     const markerStroke = cssColour('--marker', '#b45309');
+    const onScale = (tC: number) => toTemperatureScale(tC, overlay.current.scale);
     const options: uPlot.Options = {
       width: element.clientWidth || 360,
       height,
@@ -66,7 +70,8 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
       cursor: { show: false },
       scales: {
         x: { time: false },
-        y: { range: (_u, min, max) => [Math.floor((Math.min(min, 100) - 2) / 10) * 10, Math.ceil((max + 2) / 10) * 10] },
+        // From room temperature or below to above the highest reading, in steps of ten.
+        y: { range: (_u, min, max) => [Math.floor((Math.min(min, onScale(100)) - 2) / 10) * 10, Math.ceil((max + 2) / 10) * 10] },
       },
       axes: [
         { stroke: ink, grid: { stroke: grid, width: 1 }, values: (_u, ticks) => ticks.map((s) => `${Math.round(s / 60)}`), size: 32 },
@@ -93,8 +98,8 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
             ctx.save();
             ctx.fillStyle = bandFill;
             for (const band of overlay.current.bands) {
-              const top = u.valToPos(band.toC, 'y', true);
-              const bottom = u.valToPos(band.fromC, 'y', true);
+              const top = u.valToPos(onScale(band.toC), 'y', true);
+              const bottom = u.valToPos(onScale(band.fromC), 'y', true);
               ctx.fillRect(bbox.left, top, bbox.width, bottom - top);
             }
             const expected = overlay.current.prediction;
@@ -109,7 +114,7 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
                   continue;
                 }
                 const x = u.valToPos(t, 'x', true);
-                const y = u.valToPos(expected.head_c[i]!, 'y', true);
+                const y = u.valToPos(onScale(expected.head_c[i]!), 'y', true);
                 if (isDrawing) ctx.lineTo(x, y);
                 else ctx.moveTo(x, y);
                 isDrawing = true;
@@ -172,10 +177,16 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
       const buckets = Math.max(50, Math.round(chart.width));
       if (t.length > 4 * buckets) {
         const need = 2 * buckets + 2;
-        if (scratch.current.t.length < need) scratch.current = { t: new Float64Array(need), h: new Float64Array(need) };
+        if (scratch.current.t.length < need) scratch.current = { ...scratch.current, t: new Float64Array(need), h: new Float64Array(need) };
         const count = downsampleMinMax(t, h, buckets, scratch.current.t, scratch.current.h);
         t = scratch.current.t.subarray(0, count);
         h = scratch.current.h.subarray(0, count);
+      }
+      if (scale !== 'degC') {
+        if (scratch.current.shown.length < h.length) scratch.current.shown = new Float64Array(Math.max(h.length, 2 * scratch.current.shown.length));
+        const shown = scratch.current.shown.subarray(0, h.length);
+        for (let i = 0; i < h.length; i++) shown[i] = toTemperatureScale(h[i]!, scale);
+        h = shown;
       }
       chart.setData([t, h]);
       if (windowS !== undefined && t.length > 0) {
@@ -186,12 +197,12 @@ export function TraceChart({ readings, version, windowS, bands = [], markers = [
     const wait = minRedrawMs - (performance.now() - lastDraw.current);
     if (wait <= 0) draw();
     else if (pending.current === null) pending.current = window.setTimeout(draw, wait);
-  }, [readings, version, windowS, minRedrawMs, bands, markers, prediction]);
+  }, [readings, version, windowS, minRedrawMs, bands, markers, prediction, scale]);
 
   return (
     <figure class="trace">
       <figcaption>{label}</figcaption>
-      <div class="trace-chart" ref={host} role="img" aria-label={`${label}: head temperature, °C, against minutes since heat on`} />
+      <div class="trace-chart" ref={host} role="img" aria-label={`${label}: head temperature, ${temperatureScaleLabel[scale]}, against minutes since heat on`} />
     </figure>
   );
 }

@@ -1,24 +1,25 @@
 import { useMemo, useState } from 'preact/hooks';
 import type { RunFractions, RunRecord } from '../../run/index.ts';
 import { buildRunReport, clockTime, type Composition } from '../../run/report/index.ts';
+import type { Figures } from '../../science/index.ts';
 import { fieldsFromFractions, fractionsFromFields, type FractionFields, type ReceiverFields } from './fractionForm.ts';
 import './report.css';
 
 interface FractionsScreenProps {
   run: RunRecord;
+  /** Figures and typed numbers in the chemist's units and decimal mark (Settings). */
+  figures: Figures;
   onSave(fractions: RunFractions): Promise<void>;
   onAddNote(text: string): Promise<void>;
   onOpenReport(): void;
   onBack(): void;
 }
 
-const c1 = (v: number) => (Number.isFinite(v) ? v.toFixed(1) : '—');
-
-function CompositionLine({ label, names, composition }: { label: string; names: string[]; composition: Composition | null }) {
+function CompositionLine({ label, names, composition, figures }: { label: string; names: string[]; composition: Composition | null; figures: Figures }) {
   if (!composition) return null;
   return (
     <p class="composition">
-      <span>{label}</span> {names.map((n, i) => `${n} ${(100 * composition.mass[i]!).toFixed(1)} %`).join(', ')} <small>(by mass)</small>
+      <span>{label}</span> {names.map((n, i) => `${n} ${figures.percent(composition.mass[i])}`).join(', ')} <small>(by mass)</small>
     </p>
   );
 }
@@ -40,13 +41,14 @@ function UnitChoice({ value, name, label, onChange }: { value: 'mL' | 'g'; name:
  * Fractions: each receiver with its head-temperature range and times from the run; the chemist
  * enters the amount and an analysis. Big fields and buttons, for gloved hands.
  */
-export function FractionsScreen({ run, onSave, onAddNote, onOpenReport, onBack }: FractionsScreenProps) {
+export function FractionsScreen({ run, figures, onSave, onAddNote, onOpenReport, onBack }: FractionsScreenProps) {
   const components = run.charge.map((c) => c.name);
   const receivers = run.receivers.map((r) => r.receiver);
-  const [fields, setFields] = useState<FractionFields>(() => fieldsFromFractions(run.fractions, receivers, components));
+  const style = figures.style;
+  const [fields, setFields] = useState<FractionFields>(() => fieldsFromFractions(run.fractions, receivers, components, style));
   const [message, setMessage] = useState<string | null>(null);
   const [note, setNote] = useState('');
-  const parsed = useMemo(() => fractionsFromFields(fields, components), [fields]);
+  const parsed = useMemo(() => fractionsFromFields(fields, components, style), [fields, style]);
   const report = useMemo(() => buildRunReport({ ...run, fractions: parsed.fractions }), [run, parsed]);
   const names = report.components;
 
@@ -83,7 +85,7 @@ export function FractionsScreen({ run, onSave, onAddNote, onOpenReport, onBack }
           <fieldset class="receiver-card" key={row.receiver} aria-labelledby={`${id}-title`}>
             <h3 id={`${id}-title`}>Receiver {row.receiver}</h3>
             <p class="receiver-range" data-testid={`range-${row.receiver}`}>
-              {c1(row.minHeadC)}–{c1(row.maxHeadC)} °C · {clockTime(row.fromS)} to {clockTime(row.toS)}
+              {figures.temperatureNumber(row.minHeadC)}–{figures.temperature(row.maxHeadC)} · {clockTime(row.fromS)} to {clockTime(row.toS)}
             </p>
             <label class="big-field">
               <span>Amount collected</span>
@@ -104,7 +106,7 @@ export function FractionsScreen({ run, onSave, onAddNote, onOpenReport, onBack }
               <div class="analysis-fields">
                 <label class="big-field"><span>n<sub>D</sub></span>
                   <input inputMode="decimal" aria-label={`Receiver ${row.receiver} refractive index`} value={f.n} onInput={(e) => setReceiver(row.receiver, { n: e.currentTarget.value })} /></label>
-                <label class="big-field"><span>read at °C</span>
+                <label class="big-field"><span>read at {figures.temperatureLabel}</span>
                   <input inputMode="decimal" aria-label={`Receiver ${row.receiver} reading temperature`} value={f.atC} onInput={(e) => setReceiver(row.receiver, { atC: e.currentTarget.value })} /></label>
                 <label class="big-field"><span>mixing rule</span>
                   <select value={f.rule} onChange={(e) => setReceiver(row.receiver, { rule: e.currentTarget.value as ReceiverFields['rule'] })}>
@@ -124,8 +126,8 @@ export function FractionsScreen({ run, onSave, onAddNote, onOpenReport, onBack }
                 ))}
               </div>
             )}
-            <CompositionLine label="Analysis:" names={names} composition={row.measured} />
-            <CompositionLine label="From head temperature:" names={names} composition={row.estimated} />
+            <CompositionLine label="Analysis:" names={names} composition={row.measured} figures={figures} />
+            <CompositionLine label="From head temperature:" names={names} composition={row.estimated} figures={figures} />
             {row.measuredBy && <p class="method-note">{row.measuredBy}</p>}
             {row.warnings.map((w) => <p key={w} class="caution">{w}</p>)}
           </fieldset>

@@ -1,6 +1,7 @@
 import { useMemo, useState } from 'preact/hooks';
 import { ReadingBuffer, runRecordToJson, runTraceCsv, type RunRecord } from '../../run/index.ts';
-import { buildRunReport, clockTime, plateMethod, reportText, runTimeline, volumeCurve } from '../../run/report/index.ts';
+import { buildRunReport, chargeWords, clockTime, columnWords, plateMethod, reportText, runTimeline, volumeCurve } from '../../run/report/index.ts';
+import type { Figures } from '../../science/index.ts';
 import { TraceChart } from '../chart/TraceChart.tsx';
 import { runFileName, type FileActions } from './fileActions.ts';
 import { VolumeChart } from './VolumeChart.tsx';
@@ -9,19 +10,18 @@ import './report.css';
 interface ReportScreenProps {
   run: RunRecord;
   files: FileActions;
+  /** Figures in the chemist's units and decimal mark (Settings). */
+  figures: Figures;
   onOpenFractions(): void;
   onBack(): void;
 }
 
-const pct = (f: number | null | undefined) => (f == null || !Number.isFinite(f) ? '—' : `${(100 * f).toFixed(1)} %`);
-const g = (kg: number | null | undefined) => (kg == null || !Number.isFinite(kg) ? '—' : `${(kg * 1000).toFixed(2)} g`);
-const ml = (m3: number | null | undefined) => (m3 == null || !Number.isFinite(m3) ? '—' : `${(m3 * 1e6).toFixed(1)} mL`);
-const c1 = (c: number | null) => (c == null || !Number.isFinite(c) ? '—' : `${c.toFixed(1)} °C`);
-
 /** The run written up for a lab notebook: printable, shareable, exportable. */
-export function ReportScreen({ run, files, onOpenFractions, onBack }: ReportScreenProps) {
+export function ReportScreen({ run, files, figures, onOpenFractions, onBack }: ReportScreenProps) {
+  const { percent: pct, grams: g, millilitres: ml, number: n } = figures;
+  const c1 = (c: number | null) => figures.temperature(c);
   const report = useMemo(() => buildRunReport(run), [run]);
-  const text = useMemo(() => reportText(run, report), [run, report]);
+  const text = useMemo(() => reportText(run, report, figures), [run, report, figures]);
   const timeline = useMemo(() => runTimeline(run), [run]);
   const buffer = useMemo(() => {
     const b = new ReadingBuffer(Math.max(1, run.readings.time_s.length));
@@ -52,17 +52,17 @@ export function ReportScreen({ run, files, onOpenFractions, onBack }: ReportScre
         Run {run.id} · started {run.started_at.replace('T', ' ').slice(0, 16)} UTC{run.ended_at ? ` · ended ${run.ended_at.replace('T', ' ').slice(0, 16)} UTC` : ''} · {run.source.label}
       </p>
       <dl class="report-facts">
-        <div><dt>Charge</dt><dd>{run.charge.map((c) => `${c.name} ${c.amount} ${c.unit}`).join(', ') || 'not recorded'}</dd></div>
-        <div><dt>Pressure</dt><dd>{(report.pressurePa / 1000).toFixed(2)} kPa{run.pressure_pa == null ? ' (assumed)' : ''}</dd></div>
-        <div><dt>Column</dt><dd>{run.column ? `${run.column.description}${run.column.theoretical_plates != null ? `, ${run.column.theoretical_plates} plates planned` : ''}` : 'not recorded'}</dd></div>
+        <div><dt>Charge</dt><dd>{chargeWords(run, figures)}</dd></div>
+        <div><dt>Pressure</dt><dd>{figures.pressure(report.pressurePa)}{run.pressure_pa == null ? ' (assumed)' : ''}</dd></div>
+        <div><dt>Column</dt><dd>{columnWords(run)}</dd></div>
         <div><dt>Heat</dt><dd>{run.heat_changes.length === 0 ? 'no changes recorded' : run.heat_changes.map((h) => `${clockTime(h.time_s)} ${h.text}`).join('; ')}</dd></div>
       </dl>
       {report.problems.map((p) => <p key={p} class="notice">{p}</p>)}
 
       <section class="report-plots">
-        <TraceChart readings={buffer} version={buffer.length} bands={bands} markers={markers} height={180} label="Trace with receiver changes (minutes since heat on)" minRedrawMs={0} />
+        <TraceChart readings={buffer} version={buffer.length} scale={figures.style.temperature} bands={bands} markers={markers} height={180} label="Trace with receiver changes (minutes since heat on)" minRedrawMs={0} />
         {curve.volumeMl.length > 0 && (
-          <figure class="trace"><figcaption>Head temperature against distilled volume</figcaption><VolumeChart volumeMl={curve.volumeMl} headC={curve.headC} height={180} /></figure>
+          <figure class="trace"><figcaption>Head temperature against distilled volume</figcaption><VolumeChart volumeMl={curve.volumeMl} headC={curve.headC} height={180} scale={figures.style.temperature} /></figure>
         )}
       </section>
 
@@ -111,8 +111,8 @@ export function ReportScreen({ run, files, onOpenFractions, onBack }: ReportScre
       <h3>Column</h3>
       {'reason' in report.plates ? <p>Plates not estimated: {report.plates.reason}.</p> : (
         <p data-testid="plates">
-          {report.plates.plates.toFixed(1)} theoretical plates ({report.plates.stages.toFixed(1)} stages with the pot), from receiver {report.plates.receiver}: x<sub>D</sub> {report.plates.distillateLight.toFixed(3)},
-          x<sub>W</sub> {report.plates.potLight.toFixed(3)}, α {report.plates.alpha.toFixed(2)}{report.plates.hetpM !== null ? `; HETP ${(report.plates.hetpM * 100).toFixed(1)} cm` : ''}.
+          {n(report.plates.plates, 1)} theoretical plates ({n(report.plates.stages, 1)} stages with the pot), from receiver {report.plates.receiver}: x<sub>D</sub> {n(report.plates.distillateLight, 3)},
+          x<sub>W</sub> {n(report.plates.potLight, 3)}, α {n(report.plates.alpha, 2)}{report.plates.hetpM !== null ? `; HETP ${n(report.plates.hetpM * 100, 1)} cm` : ''}.
         </p>
       )}
       <p class="method-note">{plateMethod}</p>

@@ -1,5 +1,6 @@
 import { useEffect, useState } from 'preact/hooks';
 import type { RunDraft, RunFractions, RunRecord } from '../../run/index.ts';
+import type { Figures } from '../../science/index.ts';
 import { editFinishedRun, loadRunRecord, type KeyValueStore } from '../../store/index.ts';
 import { browserFileActions, type FileActions } from '../report/fileActions.ts';
 import { FractionsScreen } from '../report/FractionsScreen.tsx';
@@ -10,6 +11,8 @@ export type RunView = { runId: string; view: 'fractions' | 'report' } | null;
 
 export interface RunsAreaProps {
   store: KeyValueStore;
+  /** Figures in the chemist's units and decimal mark (Settings). */
+  figures: Figures;
   /** Open this run's Fractions or Report first (after a run ends, or from elsewhere). */
   open: RunView;
   onOpenChange(open: RunView): void;
@@ -21,7 +24,7 @@ export interface RunsAreaProps {
 }
 
 /** The Runs tab: the list, and a run's Fractions and Report screens. Loaded on demand. */
-export function RunsArea({ store, open, onOpenChange, syncStateOf, onDuplicatePlan, onAmended, files = browserFileActions() }: RunsAreaProps) {
+export function RunsArea({ store, figures, open, onOpenChange, syncStateOf, onDuplicatePlan, onAmended, files = browserFileActions() }: RunsAreaProps) {
   const [run, setRun] = useState<RunRecord | null>(null);
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {
@@ -48,6 +51,6 @@ export function RunsArea({ store, open, onOpenChange, syncStateOf, onDuplicatePl
     onAmended?.(run.id);
   };
   return open.view === 'fractions'
-    ? <FractionsScreen run={run} onSave={saveFractions} onAddNote={addNote} onOpenReport={() => onOpenChange({ runId: run.id, view: 'report' })} onBack={() => onOpenChange(null)} />
-    : <ReportScreen run={run} files={files} onOpenFractions={() => onOpenChange({ runId: run.id, view: 'fractions' })} onBack={() => onOpenChange(null)} />;
+    ? <FractionsScreen run={run} figures={figures} onSave={saveFractions} onAddNote={addNote} onOpenReport={() => onOpenChange({ runId: run.id, view: 'report' })} onBack={() => onOpenChange(null)} />
+    : <ReportScreen run={run} files={files} figures={figures} onOpenFractions={() => onOpenChange({ runId: run.id, view: 'fractions' })} onBack={() => onOpenChange(null)} />;
 }

@@ -18,6 +18,8 @@ export interface ConnectSensorProps {
   onConnected(sensor: ConnectedSensor): void;
   onDemo(): void;
   onCancel(): void;
+  /** The thermometer's scale and the reminder interval for typed readings, from Settings. */
+  typedDefaults?: TypedFields;
   /** Tests and other browsers pass their own. */
   env?: SensorEnvironment;
   capabilities?: SourceCapability[];
@@ -85,7 +87,7 @@ const connectLabel: Record<string, string> = {
  * Connecting a sensor before heat on: which source (with what this browser allows, and why not
  * the rest), its settings, then a live look at what arrives before the chemist accepts it.
  */
-export function ConnectSensor({ onConnected, onDemo, onCancel, env, capabilities }: ConnectSensorProps) {
+export function ConnectSensor({ onConnected, onDemo, onCancel, typedDefaults, env, capabilities }: ConnectSensorProps) {
   const environment = useMemo(() => env ?? browserSensorEnvironment(), [env]);
   const choices = useMemo(
     () => sourceChoices(capabilities ?? describeCapabilities(fromNavigator(navigator, globalThis.isSecureContext))),
@@ -96,7 +98,7 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, env, capabilities
   const [lineEnding, setLineEnding] = useState<LineEnding>('any');
   const [modbus, setModbus] = useState<ModbusFields>({ address: '1', functionCode: '3', register: '0', encoding: 'int16-0.1', parity: 'none', unit: 'C' });
   const [polling, setPolling] = useState<PollingFields>({ query: '', terminator: 'crlf', intervalS: '1', name: '' });
-  const [typed, setTyped] = useState<TypedFields>({ unit: 'C', reminderEveryS: 60 });
+  const [typed, setTyped] = useState<TypedFields>(typedDefaults ?? { unit: 'C', reminderEveryS: 60 });
   const [connected, setConnected] = useState<ConnectedSensor | null>(null);
   const [format, setFormat] = useState<LineFormat | null>(null);
   const [error, setError] = useState<string | null>(null);

@@ -2,6 +2,7 @@ import { useEffect, useState } from 'preact/hooks';
 import { isSensorLiveSource } from '../../sensor/liveSourceAdapter.ts';
 import type { ManualSource } from '../../sensor/manualSource.ts';
 import type { SensorSetup } from '../../sensor/sensorSetup.ts';
+import type { DecimalMark } from '../../science/index.ts';
 import type { RunSession } from '../../session/index.ts';
 import { reconnectRestoredSensor } from './sensorRun.ts';
 import { TypedReadingPad } from './TypedReadingPad.tsx';
@@ -14,12 +15,14 @@ interface SensorPanelProps {
   onRestoredReconnected(): void;
   /** Sounds the reminder tone for typed readings. */
   onReminder(): void;
+  /** The keypad's decimal key and display follow Settings. */
+  decimalMark?: DecimalMark;
 }
 
 const isDown = (state: string) => state === 'lost' || state === 'failed' || state === 'stopped';
 
 /** On the Watch screen: how the sensor is doing, one tap to reconnect it, the keypad for typed readings. */
-export function SensorPanel({ session, restoredSetup, onRestoredReconnected, onReminder }: SensorPanelProps) {
+export function SensorPanel({ session, restoredSetup, onRestoredReconnected, onReminder, decimalMark = '.' }: SensorPanelProps) {
   const source = isSensorLiveSource(session.source) ? session.source : null;
   const [status, setStatus] = useState(source?.status ?? null);
   const [error, setError] = useState<string | null>(null);
@@ -73,7 +76,7 @@ export function SensorPanel({ session, restoredSetup, onRestoredReconnected, onR
       {!isDown(state) && last && !last.valid && <p class="hint">Last reading not valid: {last.reason}</p>}
       {isDown(state) && source.kind !== 'typed' && reconnectButton}
       {error && <p class="warning" role="alert">{error}</p>}
-      {source.kind === 'typed' && <TypedReadingPad source={source.bridge as ManualSource} onReminder={onReminder} />}
+      {source.kind === 'typed' && <TypedReadingPad source={source.bridge as ManualSource} onReminder={onReminder} decimalMark={decimalMark} />}
     </div>
   );
 }

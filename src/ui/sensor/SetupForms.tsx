@@ -1,4 +1,5 @@
 import type { ComponentChildren } from 'preact';
+import { readingReminderChoicesS, reminderWords } from '../../store/index.ts';
 import { baudRates } from '../../sensor/serialTypes.ts';
 import type { LineEnding } from '../../sensor/protocols/lineSplitter.ts';
 import type { RegisterEncoding } from '../../sensor/protocols/modbusRegisters.ts';
@@ -133,7 +134,6 @@ export interface TypedFields {
   reminderEveryS: number;
 }
 
-export const reminderChoicesS = [30, 60, 120, 300] as const;
 
 export function TypedForm({ value, onChange }: { value: TypedFields; onChange(next: TypedFields): void }) {
   return (
@@ -146,7 +146,7 @@ export function TypedForm({ value, onChange }: { value: TypedFields; onChange(ne
       </Field>
       <Field label="Remind me to read it every">
         <select value={String(value.reminderEveryS)} onChange={(e) => onChange({ ...value, reminderEveryS: Number((e.target as HTMLSelectElement).value) })}>
-          {reminderChoicesS.map((s) => <option key={s} value={String(s)}>{s < 60 ? `${s} seconds` : s === 60 ? '1 minute' : `${s / 60} minutes`}</option>)}
+          {readingReminderChoicesS.map((s) => <option key={s} value={String(s)}>{reminderWords(s)}</option>)}
         </select>
       </Field>
     </>

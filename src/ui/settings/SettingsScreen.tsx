@@ -1,6 +1,14 @@
-import { pressureUnitSettings, type DecimalSeparatorSetting, type PressureUnitSetting, type Settings, type TemperatureUnitSetting } from '../../store/index.ts';
+import {
+  pressureUnitSettings,
+  readingReminderChoicesS,
+  reminderWords,
+  type DecimalSeparatorSetting,
+  type PressureUnitSetting,
+  type Settings,
+  type TemperatureUnitSetting,
+} from '../../store/index.ts';
 import './settings.css';
-import { localeDecimalSeparator } from '../units/index.ts';
+import { formatDecimal, localeDecimalSeparator, resolveDecimalSeparator, temperatureUnitLabel, toDisplayTemperatureDifference } from '../units/index.ts';
 import type { AppServices } from '../services.ts';
 import { SyncSettings } from './SyncSettings.tsx';
 
@@ -12,29 +20,59 @@ interface SettingsScreenProps {
 
 const demoSpeeds = [1, 10, 30, 120, 600];
 
+type NumberSetting = 'alarmRepeatS' | 'snoozeMin' | 'breakthroughRiseC' | 'fallAwayC' | 'noVapourMin' | 'sensorSilenceS' | 'readingReminderS';
+
+/** The offered values, with the saved one among them even when it is not a usual choice. */
+function choicesWith(choices: readonly number[], current: number): number[] {
+  return [...new Set([...choices, current])].sort((a, b) => a - b);
+}
+
+function NumberChoice({ label, name, choices, words, settings, onChange }: {
+  label: string;
+  name: NumberSetting;
+  choices: readonly number[];
+  words(value: number): string;
+  settings: Settings;
+  onChange(settings: Settings): void;
+}) {
+  return (
+    <label class="field-row">
+      <span>{label}</span>
+      <select value={String(settings[name])} onChange={(e) => onChange({ ...settings, [name]: Number(e.currentTarget.value) })}>
+        {choicesWith(choices, settings[name]).map((v) => <option key={v} value={String(v)}>{words(v)}</option>)}
+      </select>
+    </label>
+  );
+}
+
 /** Voice, sound and vibration on or off, each testable here before a run needs it. */
 export function SettingsScreen({ settings, services, onChange }: SettingsScreenProps) {
   const { alerter, notifier } = services;
   const speech = alerter.channels.speech;
   const toggle = (key: 'speech' | 'sound' | 'vibration') => onChange({ ...settings, [key]: !settings[key] });
+  const separator = resolveDecimalSeparator(settings.decimalSeparator);
+  const unit = settings.temperatureUnit;
+  const difference = (dC: number) => `${formatDecimal(toDisplayTemperatureDifference(dC, unit), separator, 1)} ${temperatureUnitLabel[unit]}`;
+  const choice = { settings, onChange };
 
   return (
     <section class="settings" aria-labelledby="settings-title">
       <h1 id="settings-title" class="screen-title">Settings</h1>
 
       <h2>Alarms</h2>
-      <label class="field-row">
-        <span>Repeat an alarm until acknowledged, every</span>
-        <select value={String(settings.alarmRepeatS)} onChange={(e) => onChange({ ...settings, alarmRepeatS: Number(e.currentTarget.value) })}>
-          {[15, 30, 60, 120].map((s) => <option key={s} value={String(s)}>{s} s</option>)}
-        </select>
-      </label>
-      <label class="field-row">
-        <span>Snooze for</span>
-        <select value={String(settings.snoozeMin)} onChange={(e) => onChange({ ...settings, snoozeMin: Number(e.currentTarget.value) })}>
-          {[1, 2, 3, 5, 10].map((m) => <option key={m} value={String(m)}>{m} min</option>)}
-        </select>
-      </label>
+      <NumberChoice {...choice} label="Repeat an alarm until acknowledged, every" name="alarmRepeatS" choices={[15, 30, 60, 120]} words={(v) => `${v} s`} />
+      <NumberChoice {...choice} label="Snooze for" name="snoozeMin" choices={[1, 2, 3, 5, 10]} words={(v) => `${v} min`} />
+      <h3>When to alarm</h3>
+      <NumberChoice {...choice} label="Cut: the head rises above its plateau by" name="breakthroughRiseC" choices={[0.5, 1, 1.5, 2, 3, 5]} words={difference} />
+      <NumberChoice {...choice} label="Stall: the head falls below its plateau by" name="fallAwayC" choices={[2, 3, 4, 6, 8, 10]} words={difference} />
+      <NumberChoice {...choice} label="Stall: no vapour at the head after heating for" name="noVapourMin" choices={[15, 20, 30, 45, 60, 90, 120]} words={(v) => `${v} min`} />
+      <NumberChoice {...choice} label="Sensor: no reading from a connected sensor for" name="sensorSilenceS" choices={[3, 5, 10, 20, 30, 60]} words={(v) => `${v} s`} />
+      <NumberChoice {...choice} label="Typed readings: remind me every" name="readingReminderS" choices={readingReminderChoicesS} words={reminderWords} />
+      <p class="hint">
+        A larger rise calls the cut later and mixes more of the next component into the receiver; a smaller one may
+        alarm on a draught. A small fall just before a cut (the pre-cut sag) is normal and is not a stall. The alarms help you
+        watch the still; they do not replace watching it, or your lab’s procedures.
+      </p>
       <p class="hint">A new run uses these; a run already going keeps the ones it started with.</p>
       <label class="switch">
         <input type="checkbox" checked={settings.speech} onChange={() => toggle('speech')} />
@@ -77,7 +115,7 @@ export function SettingsScreen({ settings, services, onChange }: SettingsScreenP
       <p class="hint">Notifications reach you when Cutbell is hidden. Keep the app in front with the screen on during a run: a phone may pause hidden pages.</p>
 
       <h2>Units</h2>
-      <p class="hint">Used by every box you type in and every figure Cutbell shows on Prepare.</p>
+      <p class="hint">Used by every box you type in and every figure Cutbell shows: Prepare, Watch and the reports.</p>
       <label class="setting-choice">
         <span>Temperature</span>
         <select class="select-input" value={settings.temperatureUnit} onChange={(e) => onChange({ ...settings, temperatureUnit: (e.currentTarget as HTMLSelectElement).value as TemperatureUnitSetting })}>

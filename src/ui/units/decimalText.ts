@@ -1,3 +1,4 @@
+import { formatWithMark } from '../../science/index.ts';
 import type { DecimalSeparatorSetting } from '../../store/index.ts';
 
 /** The mark between the whole and the fractional part of a typed number. */
@@ -34,12 +35,8 @@ export function parseDecimal(text: string, separator: DecimalSeparator): number 
   return Number(trimmed.replace(',', '.'));
 }
 
-/** A number written with the given decimal mark and a fixed number of decimals. */
-export function formatDecimal(value: number, separator: DecimalSeparator, decimals: number): string {
-  if (!Number.isFinite(value)) return '–';
-  const text = value.toFixed(decimals);
-  return separator === ',' ? text.replace('.', ',') : text;
-}
+/** A number written with the given decimal mark and a fixed number of decimals ('–' when not finite). */
+export const formatDecimal: (value: number, separator: DecimalSeparator, decimals: number) => string = formatWithMark;
 
 /** Rewrites a number typed with one mark for the other (templates keep '.' inside). */
 export function switchDecimalMark(text: string, from: DecimalSeparator, to: DecimalSeparator): string {

@@ -1,24 +1,25 @@
-import { pressureIn, pressureUnitsPa, roundSignificant } from '../../science/index.ts';
-import type { PressureUnitSetting, TemperatureUnitSetting } from '../../store/index.ts';
-import { formatDecimal, type DecimalSeparator } from './decimalText.ts';
+import {
+  figuresFor,
+  fromTemperatureScale,
+  pressureUnitsPa,
+  temperatureScaleLabel,
+  toTemperatureScale,
+  toTemperatureScaleDifference,
+  type Figures,
+} from '../../science/index.ts';
+import type { PressureUnitSetting, Settings, TemperatureUnitSetting } from '../../store/index.ts';
+import { formatDecimal, resolveDecimalSeparator, type DecimalSeparator } from './decimalText.ts';
 
-export const temperatureUnitLabel: Readonly<Record<TemperatureUnitSetting, string>> = { degC: '°C', degF: '°F' };
+export const temperatureUnitLabel: Readonly<Record<TemperatureUnitSetting, string>> = temperatureScaleLabel;
 
-// degF = degC x 9/5 + 32 (exact, by the definition of the Fahrenheit scale; NIST SP 811 B.8).
 /** A degC value on the chemist's scale. */
-export function toDisplayTemperature(tC: number, unit: TemperatureUnitSetting): number {
-  return unit === 'degF' ? tC * 1.8 + 32 : tC;
-}
+export const toDisplayTemperature: (tC: number, unit: TemperatureUnitSetting) => number = toTemperatureScale;
 
 /** A value typed on the chemist's scale back to degC. */
-export function fromDisplayTemperature(value: number, unit: TemperatureUnitSetting): number {
-  return unit === 'degF' ? (value - 32) / 1.8 : value;
-}
+export const fromDisplayTemperature: (value: number, unit: TemperatureUnitSetting) => number = fromTemperatureScale;
 
 /** A temperature difference (a window's width) on the chemist's scale. */
-export function toDisplayTemperatureDifference(dC: number, unit: TemperatureUnitSetting): number {
-  return unit === 'degF' ? dC * 1.8 : dC;
-}
+export const toDisplayTemperatureDifference: (dC: number, unit: TemperatureUnitSetting) => number = toTemperatureScaleDifference;
 
 /** "78.4 °C" or "173.1 °F", with the chosen decimal mark. */
 export function formatTemperature(tC: number, unit: TemperatureUnitSetting, separator: DecimalSeparator, decimals = 1): string {
@@ -26,9 +27,13 @@ export function formatTemperature(tC: number, unit: TemperatureUnitSetting, sepa
 }
 
 /** A pressure in the chosen unit with four significant digits: "101.3 kPa", "745,0 mmHg". */
-export function formatPressureSetting(pPa: number, unit: PressureUnitSetting, separator: DecimalSeparator, digits = 4): string {
-  const text = roundSignificant(pressureIn(pPa, unit), digits);
-  return `${separator === ',' ? text.replace('.', ',') : text} ${unit}`;
+export function formatPressureSetting(pPa: number, unit: PressureUnitSetting, separator: DecimalSeparator): string {
+  return figuresFor({ temperature: 'degC', pressure: unit, decimalMark: separator }).pressure(pPa);
+}
+
+/** Every figure on a screen written as Settings say: temperature scale, pressure unit, decimal mark. */
+export function figuresForSettings(settings: Pick<Settings, 'temperatureUnit' | 'pressureUnit' | 'decimalSeparator'>, locale?: string): Figures {
+  return figuresFor({ temperature: settings.temperatureUnit, pressure: settings.pressureUnit, decimalMark: resolveDecimalSeparator(settings.decimalSeparator, locale) });
 }
 
 /** A typed value in a pressure unit to Pa. */

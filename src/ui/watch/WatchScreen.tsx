@@ -1,12 +1,13 @@
 import type { ComponentChildren } from 'preact';
 import { useState } from 'preact/hooks';
 import { headRateCPerMin, type RunPlan } from '../../run/index.ts';
+import type { Figures } from '../../science/index.ts';
 import type { RunSession } from '../../session/index.ts';
 import { TraceChart, type TemperatureBand, type TraceMarker } from '../chart/TraceChart.tsx';
 import { ConfirmDialog } from '../common/ConfirmDialog.tsx';
 import { TextDialog } from '../common/TextDialog.tsx';
 import { useSessionVersion } from '../useSession.ts';
-import { formatElapsed, formatHeadC, formatRate } from './format.ts';
+import { formatElapsed, formatHead, formatRate } from './format.ts';
 import { stateWords } from './stateWords.ts';
 
 interface PlanWindow {
@@ -25,12 +26,14 @@ interface WatchScreenProps {
   backgroundNotice: string | null;
   onDismissBackgroundNotice(): void;
   onEnded(): void;
+  /** Figures on the chemist's scale and with their decimal mark (Settings). */
+  figures: Figures;
   /** The sensor's status, reconnect and keypad (src/ui/sensor), under the head temperature. */
   sensorPanel?: ComponentChildren;
 }
 
 /** The live run: what a chemist glances at from across the hood, and the few taps they need. */
-export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNotice, onEnded, sensorPanel }: WatchScreenProps) {
+export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNotice, onEnded, figures, sensorPanel }: WatchScreenProps) {
   const version = useSessionVersion(session);
   const [dialog, setDialog] = useState<'end' | 'note' | 'heat' | null>(null);
   const { readings, header } = session;
@@ -61,10 +64,10 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
       <div class="head-readout">
         <span class="head-label">Head temperature</span>
         <span class="head-value" data-testid="head-temp">
-          {formatHeadC(headC)}
-          <span class="head-unit">°C</span>
+          {formatHead(headC, figures)}
+          <span class="head-unit">{figures.temperatureLabel}</span>
         </span>
-        <span class="head-state" data-testid="watch-state">{stateWords(session.watcherState, session.plateauC, hasVapour)}</span>
+        <span class="head-state" data-testid="watch-state">{stateWords(session.watcherState, session.plateauC, hasVapour, figures)}</span>
       </div>
       {sensorPanel}
 
@@ -84,7 +87,7 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
       <dl class="figures">
         <div>
           <dt>Rate</dt>
-          <dd data-testid="head-rate">{formatRate(rate)} <small>°C/min</small></dd>
+          <dd data-testid="head-rate">{formatRate(rate, figures)} <small>{figures.temperatureLabel}/min</small></dd>
         </div>
         <div>
           <dt>Since heat on</dt>
@@ -94,12 +97,12 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
           <dt>Receiver</dt>
           <dd data-testid="receiver">
             {receiver}
-            {current && <small> {current.fromC.toFixed(0)}–{current.toC.toFixed(0)} °C</small>}
+            {current && <small> {figures.temperatureNumber(current.fromC, 0)}–{figures.temperature(current.toC, 0)}</small>}
           </dd>
         </div>
         <div>
           <dt>Next cut</dt>
-          <dd>{nextCut ? <>{nextCut.fromC.toFixed(1)} <small>°C</small></> : <small>when it rises</small>}</dd>
+          <dd data-testid="next-cut">{nextCut ? <>{figures.temperatureNumber(nextCut.fromC)} <small>{figures.temperatureLabel}</small></> : <small>when it rises</small>}</dd>
         </div>
       </dl>
 
@@ -115,8 +118,8 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
         </div>
       )}
 
-      <TraceChart readings={readings} version={version} windowS={600} bands={bands} markers={markers} prediction={prediction} label="Last 10 minutes" />
-      <TraceChart readings={readings} version={version} bands={bands} markers={markers} prediction={prediction} height={140} label={prediction ? 'Whole run (faint line: predicted)' : 'Whole run'} />
+      <TraceChart readings={readings} version={version} scale={figures.style.temperature} windowS={600} bands={bands} markers={markers} prediction={prediction} label="Last 10 minutes" />
+      <TraceChart readings={readings} version={version} scale={figures.style.temperature} bands={bands} markers={markers} prediction={prediction} height={140} label={prediction ? 'Whole run (faint line: predicted)' : 'Whole run'} />
 
       {!session.isEnded && (
         <button type="button" class="action action-end" onClick={() => setDialog('end')}>End run</button>

@@ -13,7 +13,7 @@ afterEach(() => {
 
 const settle = () => new Promise((resolve) => setTimeout(resolve, 0));
 
-async function mount(unit: 'C' | 'F' = 'C') {
+async function mount(unit: 'C' | 'F' = 'C', decimalMark: '.' | ',' = '.') {
   let nowS = 100;
   const source: ManualSource = createManualSource({ clock: () => nowS, unit, reminderEveryS: 60 });
   await source.start();
@@ -22,7 +22,7 @@ async function mount(unit: 'C' | 'F' = 'C') {
   let reminders = 0;
   host = document.createElement('div');
   document.body.append(host);
-  render(<TypedReadingPad source={source} onReminder={() => reminders++} />, host);
+  render(<TypedReadingPad source={source} onReminder={() => reminders++} decimalMark={decimalMark} />, host);
   const press = async (...labels: string[]) => {
     for (const label of labels) {
       const button = [...host.querySelectorAll('button')].find((b) => (b.getAttribute('aria-label') ?? b.textContent) === label);
@@ -44,6 +44,17 @@ describe('TypedReadingPad', () => {
     expect(pad.stored).toHaveLength(1);
     expect(pad.stored[0]).toMatchObject({ headC: 78.5, timeS: 161, valid: true });
     expect(pad.display()).toMatch(/^–/);
+    pad.source.stop();
+  });
+
+  it('with a decimal comma set, the key and the display show a comma and the value is the same', async () => {
+    const pad = await mount('C', ',');
+    await pad.press('7', '8', 'decimal comma', '5');
+    expect(pad.display()).toMatch(/^78,5/);
+    expect(host.querySelector('[aria-label="decimal comma"]')!.textContent).toBe(',');
+    await pad.press('Enter');
+    expect(pad.stored[0]).toMatchObject({ headC: 78.5, valid: true });
+    expect(host.textContent).toContain('Stored 78,5 °C');
     pad.source.stop();
   });
 

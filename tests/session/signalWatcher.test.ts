@@ -1,0 +1,60 @@
+import { describe, expect, it } from 'vitest';
+import { createSignalWatcher, watcherOptionsFor, type AlarmThresholds, type WatcherEvent } from '../../src/session/index.ts';
+
+// A shaped demo trace, not data: room temperature, vapour, a plateau at 77 degC for 15 min,
+// then a climb of 0.05 degC/s. One reading a second.
+function feed(thresholds?: AlarmThresholds): WatcherEvent[] {
+  const watcher = createSignalWatcher(null, undefined, thresholds);
+  const events: WatcherEvent[] = [];
+  for (let t = 0; t <= 2400; t++) {
+    let head: number;
+    if (t < 300) head = 22;
+    else if (t < 400) head = 22 + (55 * (t - 300)) / 100;
+    else if (t < 1300) head = 77;
+    else head = 77 + 0.05 * (t - 1300);
+    events.push(...watcher.push(t, head));
+  }
+  return events;
+}
+
+const firstOf = (events: WatcherEvent[], kind: string) => events.find((e) => e.event === kind);
+
+describe('the chemist\'s alarm thresholds reach the run watcher', () => {
+  it('watcherOptionsFor keeps the CUSUM reference at half the rise worth detecting', () => {
+    expect(watcherOptionsFor({ breakthroughRiseC: 2, noVapourS: 900, fallAwayC: 5 })).toEqual({
+      breakthroughMinRiseC: 2,
+      breakthroughReferenceC: 1,
+      noVapourStallS: 900,
+      fallAwayC: 5,
+    });
+  });
+
+  it('a larger breakthrough rise calls the cut later, after the head has risen at least that far', () => {
+    const usual = firstOf(feed(), 'breakthrough');
+    const later = firstOf(feed({ breakthroughRiseC: 3, noVapourS: 1800, fallAwayC: 4 }), 'breakthrough');
+    expect(usual).toBeDefined();
+    expect(later).toBeDefined();
+    expect(later!.time_s).toBeGreaterThan(usual!.time_s);
+    // the climb is 0.05 degC/s from 1300 s: 3 degC above the plateau at 1360 s
+    expect(later!.time_s).toBeGreaterThanOrEqual(1360);
+  });
+
+  it('a shorter no-vapour time raises the stall sooner when the head stays cold', () => {
+    const watcher = createSignalWatcher(null, undefined, { breakthroughRiseC: 1, noVapourS: 600, fallAwayC: 4 });
+    const events: WatcherEvent[] = [];
+    for (let t = 0; t <= 900; t++) events.push(...watcher.push(t, 21));
+    const stall = firstOf(events, 'stall');
+    expect(stall?.reason).toBe('no-vapour');
+    expect(stall!.time_s).toBeGreaterThanOrEqual(600);
+    expect(stall!.time_s).toBeLessThan(660);
+  });
+
+  it('a reopened run keeps the thresholds it started with', () => {
+    const watcher = createSignalWatcher(null, undefined, { breakthroughRiseC: 1, noVapourS: 600, fallAwayC: 4 });
+    for (let t = 0; t < 300; t++) watcher.push(t, 21);
+    const resumed = createSignalWatcher(null, watcher.toState());
+    const events: WatcherEvent[] = [];
+    for (let t = 300; t <= 700; t++) events.push(...resumed.push(t, 21));
+    expect(firstOf(events, 'stall')?.reason).toBe('no-vapour');
+  });
+});
