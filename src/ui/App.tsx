@@ -145,7 +145,14 @@ export function App({ services, updates }: AppProps) {
   // sync: send finished runs to the lab server (start-up, online, visible, backoff).
   useEffect(() => {
     void queueEndedRuns(services.store, services.outbox).catch(() => undefined);
-    return startSyncTriggers(services.outbox, { window, document, setTimeout, clearTimeout, nowMs: () => Date.now() });
+    // Wrapped: the timer functions throw "Illegal invocation" when called as methods of another object.
+    return startSyncTriggers(services.outbox, {
+      window,
+      document,
+      setTimeout: (callback, ms) => window.setTimeout(callback, ms),
+      clearTimeout: (handle) => window.clearTimeout(handle as number),
+      nowMs: () => Date.now(),
+    });
   }, [services]);
 
   useEffect(() => {
