@@ -42,6 +42,9 @@ it('a run finished offline is sent to the lab server when the network returns an
   expect(await run.textContent()).toMatch(/from browser test phone/);
   await run.click();
   await page.getByRole('heading', { name: /^Demo:/ }).waitFor();
-  expect(await page.getByRole('heading', { name: 'Receivers' }).count()).toBe(1);
+  // The lab view shows the run's report, read-only.
+  await page.getByTestId('fraction-table').waitFor();
+  expect(await page.getByRole('button', { name: 'All lab runs' }).count()).toBe(1);
+  expect(await page.getByRole('button', { name: 'Fractions' }).count()).toBe(0);
   await context.close();
 });

@@ -1,9 +1,11 @@
 import { useEffect, useState } from 'preact/hooks';
 import type { ComponentType } from 'preact';
+import type { Figures } from '../../science/index.ts';
 import type { Settings } from '../../store/index.ts';
 import { syncTargetFrom, type SyncTarget } from '../../sync/index.ts';
+import { figuresForSettings } from '../units/index.ts';
 
-type LabViewComponent = ComponentType<{ target: SyncTarget | null }>;
+type LabViewComponent = ComponentType<{ target: SyncTarget | null; figures: Figures }>;
 
 /** The Lab tab: loads the lab view only when opened, so the Watch screen's first load stays small. */
 export function LabTab({ settings }: { settings: Settings }) {
@@ -21,5 +23,5 @@ export function LabTab({ settings }: { settings: Settings }) {
     target = null;
   }
   if (error) return <p class="warning" role="alert">{error}</p>;
-  return View ? <View target={target} /> : <p class="notice">Opening…</p>;
+  return View ? <View target={target} figures={figuresForSettings(settings)} /> : <p class="notice">Opening…</p>;
 }

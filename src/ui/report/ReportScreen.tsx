@@ -12,12 +12,14 @@ interface ReportScreenProps {
   files: FileActions;
   /** Figures in the chemist's units and decimal mark (Settings). */
   figures: Figures;
-  onOpenFractions(): void;
+  /** Absent where the run cannot be edited here (the lab view). */
+  onOpenFractions?: () => void;
   onBack(): void;
+  backLabel?: string;
 }
 
 /** The run written up for a lab notebook: printable, shareable, exportable. */
-export function ReportScreen({ run, files, figures, onOpenFractions, onBack }: ReportScreenProps) {
+export function ReportScreen({ run, files, figures, onOpenFractions, onBack, backLabel = 'All runs' }: ReportScreenProps) {
   const { percent: pct, grams: g, millilitres: ml, number: n } = figures;
   const c1 = (c: number | null) => figures.temperature(c);
   const report = useMemo(() => buildRunReport(run), [run]);
@@ -133,8 +135,8 @@ export function ReportScreen({ run, files, figures, onOpenFractions, onBack }: R
           <button type="button" class="action action-quiet" onClick={() => void copy()}>Copy as text</button>
           <button type="button" class="action action-quiet" onClick={() => files.download(runFileName(run.title, run.started_at, 'json'), 'application/json', json())}>Export run (JSON)</button>
           <button type="button" class="action action-quiet" onClick={() => files.download(runFileName(run.title, run.started_at, 'csv'), 'text/csv', runTraceCsv(run))}>Export trace (CSV)</button>
-          <button type="button" class="action action-quiet" onClick={onOpenFractions}>Fractions</button>
-          <button type="button" class="action action-quiet" onClick={onBack}>All runs</button>
+          {onOpenFractions && <button type="button" class="action action-quiet" onClick={onOpenFractions}>Fractions</button>}
+          <button type="button" class="action action-quiet" onClick={onBack}>{backLabel}</button>
         </div>
       </div>
     </article>
