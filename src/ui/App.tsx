@@ -335,6 +335,7 @@ export function App({ services, updates }: AppProps) {
         )}
         {screen === 'watch' && stage === 'connect' && (
           <LazyConnectSensor
+            decimalMark={figures.style.decimalMark}
             typedDefaults={{ unit: settings.temperatureUnit === 'degF' ? 'F' : 'C', reminderEveryS: settings.readingReminderS }}
             onConnected={(connected) => {
               setSensor(connected);

@@ -12,12 +12,15 @@ import { LinePreview } from './LinePreview.tsx';
 import { ReadingPreview } from './ReadingPreview.tsx';
 import { BaudField, LineEndingField, ModbusForm, PollingForm, TypedForm, encodings, type ModbusFields, type PollingFields, type TypedFields } from './SetupForms.tsx';
 import { sourceChoices, type SourceChoice } from './sourceChoices.ts';
+import { parseDecimal, type DecimalSeparator } from '../units/index.ts';
 import './connect.css';
 
 export interface ConnectSensorProps {
   onConnected(sensor: ConnectedSensor): void;
   onDemo(): void;
   onCancel(): void;
+  /** The decimal mark typed numbers use (Settings). */
+  decimalMark?: DecimalSeparator;
   /** The thermometer's scale and the reminder interval for typed readings, from Settings. */
   typedDefaults?: TypedFields;
   /** Tests and other browsers pass their own. */
@@ -34,7 +37,11 @@ function integer(text: string, what: string): number {
 }
 
 /** The setup for the chosen source from the form fields; throws RangeError with plain words. */
-function setupFrom(choice: SourceChoice, f: { baudRate: number; lineEnding: LineEnding; modbus: ModbusFields; polling: PollingFields; typed: TypedFields }): SensorSetup {
+function setupFrom(
+  choice: SourceChoice,
+  f: { baudRate: number; lineEnding: LineEnding; modbus: ModbusFields; polling: PollingFields; typed: TypedFields },
+  decimalMark: DecimalSeparator,
+): SensorSetup {
   switch (choice.id) {
     case 'serial':
     case 'usb':
@@ -52,7 +59,12 @@ function setupFrom(choice: SourceChoice, f: { baudRate: number; lineEnding: Line
         unit: f.modbus.unit,
       };
     case 'polling': {
-      const intervalS = Number(f.polling.intervalS);
+      let intervalS: number;
+      try {
+        intervalS = parseDecimal(f.polling.intervalS, decimalMark);
+      } catch (error) {
+        throw new RangeError(`the interval: ${error instanceof Error ? error.message : String(error)}`);
+      }
       if (!(intervalS >= 0.1)) throw new RangeError('ask at most ten times a second (interval 0.1 s or more)');
       const name = f.polling.name.trim();
       return {
@@ -87,7 +99,7 @@ const connectLabel: Record<string, string> = {
  * Connecting a sensor before heat on: which source (with what this browser allows, and why not
  * the rest), its settings, then a live look at what arrives before the chemist accepts it.
  */
-export function ConnectSensor({ onConnected, onDemo, onCancel, typedDefaults, env, capabilities }: ConnectSensorProps) {
+export function ConnectSensor({ onConnected, onDemo, onCancel, decimalMark = '.', typedDefaults, env, capabilities }: ConnectSensorProps) {
   const environment = useMemo(() => env ?? browserSensorEnvironment(), [env]);
   const choices = useMemo(
     () => sourceChoices(capabilities ?? describeCapabilities(fromNavigator(navigator, globalThis.isSecureContext))),
@@ -121,7 +133,7 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, typedDefaults, en
     setBusy(true);
     let bridge: ReadingSource | undefined;
     try {
-      const setup = setupFrom(picked, { baudRate, lineEnding, modbus, polling, typed });
+      const setup = setupFrom(picked, { baudRate, lineEnding, modbus, polling, typed }, decimalMark);
       bridge = await createSensorBridge(setup, environment);
       await bridge.start();
       const sensor = { setup, bridge };
