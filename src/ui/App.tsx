@@ -26,6 +26,7 @@ import { UpdateNotice } from './update/UpdateNotice.tsx';
 import { useSessionVersion } from './useSession.ts';
 import { formatElapsed } from './watch/format.ts';
 import { figuresForSettings } from './units/index.ts';
+import { predictOffThread } from './watch/predictOffThread.ts';
 import { WatchScreen } from './watch/WatchScreen.tsx';
 // Runs, Fractions, Report (loaded on demand).
 import { LazyRunsArea } from './runs/LazyRunsArea.tsx';
@@ -209,9 +210,8 @@ export function App({ services, updates }: AppProps) {
             plan: toRunPlan(demoCutPlan(101_325, 4), 101_325, 4),
           };
     if (what.plan && what.charge && what.pressurePa) {
-      // Loaded on demand: the simulator and the UNIFAC tables stay out of the first load.
-      const { withPrediction } = await import('./watch/withPrediction.ts');
-      what.plan = withPrediction(what.plan, what.charge, what.pressurePa, what.column?.theoretical_plates ?? 0);
+      // In a worker: the simulator and the UNIFAC tables stay out of the first load and off the page's thread.
+      what.plan = await predictOffThread({ plan: what.plan, charge: what.charge, pressurePa: what.pressurePa, plates: what.column?.theoretical_plates ?? 0 });
     }
     // Where the readings come from: the connected sensor, else the demo still.
     const source = connected

@@ -82,6 +82,8 @@ describe('From Prepare through a simulated run to the report', () => {
 
     // Watch, on the chosen scale: cyclohexane boils at 80.7 degC (CRC Handbook 95th ed., from memory), 177 degF.
     expect(await page.locator('.head-unit').textContent()).toBe('°F');
+    // The simulator's expected trace, computed in a worker, is drawn behind the readings.
+    expect(await page.getByText('Whole run (faint line: predicted)').count()).toBe(1);
     expect(await page.getByTestId('receiver').textContent()).toMatch(/^1 \d+–\d+ °F$/);
     expect(await page.getByTestId('head-rate').textContent()).toMatch(/°F\/min/);
     await waitForHead(page, degF(70));
