@@ -1,4 +1,5 @@
 import type { Compound } from '../compounds/compound.ts';
+import { figuresFor, type Figures } from '../units/figures.ts';
 import type { PairAzeotropes } from '../vle/findAzeotropes.ts';
 
 /** One piece of advice in plain words; `basis` says where the rule comes from. */
@@ -18,11 +19,20 @@ export interface BoilingAtLab {
 const practice = 'common practice';
 
 /**
- * Advice for a charge: which method, what the column must do, and the usual cautions.
+ * Advice for a charge: which method, what the column must do, and the usual cautions, with
+ * temperatures in the reader's units (degC unless `figures` says otherwise).
  * Never a claim that a run is safe: the lab's procedures and local codes rule.
  */
-export function adviseDistillation(boiling: readonly BoilingAtLab[], azeotropes: readonly PairAzeotropes[], plates: number, minimumStages: readonly number[], heatSourceMaxK?: number): Advice[] {
+export function adviseDistillation(
+  boiling: readonly BoilingAtLab[],
+  azeotropes: readonly PairAzeotropes[],
+  plates: number,
+  minimumStages: readonly number[],
+  heatSourceMaxK?: number,
+  figures: Figures = figuresFor(),
+): Advice[] {
   const advice: Advice[] = [];
+  const apart = (dK: number, decimals = 0) => figures.temperatureDifference(dK, decimals);
   for (let i = 1; i < boiling.length; i++) {
     const light = boiling[i - 1]!;
     const heavy = boiling[i]!;
@@ -31,10 +41,10 @@ export function adviseDistillation(boiling: readonly BoilingAtLab[], azeotropes:
     // Thresholds: simple distillation for gaps above about 80 degC, a column within about
     // 40-50 degC, and very hard below about 5 degC at the bench (common practice; texts quote
     // 25-100 degC for the first figure).
-    if (gapK >= 80) advice.push({ kind: 'method', text: `${pair} boil ${gapK.toFixed(0)} degC apart: a simple distillation separates them well.`, basis: practice });
-    else if (gapK >= 45) advice.push({ kind: 'method', text: `${pair} boil ${gapK.toFixed(0)} degC apart: a short column improves the cut; simple distillation gives a mixed middle fraction.`, basis: practice });
-    else if (gapK >= 5) advice.push({ kind: 'method', text: `${pair} boil only ${gapK.toFixed(0)} degC apart: use a fractionating column and distil slowly.`, basis: practice });
-    else advice.push({ kind: 'method', text: `${pair} boil within ${gapK.toFixed(1)} degC: a bench column can barely separate them; expect mixed fractions.`, basis: practice });
+    if (gapK >= 80) advice.push({ kind: 'method', text: `${pair} boil ${apart(gapK)} apart: a simple distillation separates them well.`, basis: practice });
+    else if (gapK >= 45) advice.push({ kind: 'method', text: `${pair} boil ${apart(gapK)} apart: a short column improves the cut; simple distillation gives a mixed middle fraction.`, basis: practice });
+    else if (gapK >= 5) advice.push({ kind: 'method', text: `${pair} boil only ${apart(gapK)} apart: use a fractionating column and distil slowly.`, basis: practice });
+    else advice.push({ kind: 'method', text: `${pair} boil within ${apart(gapK, 1)}: a bench column can barely separate them; expect mixed fractions.`, basis: practice });
     const needed = minimumStages[i - 1];
     if (needed !== undefined && Number.isFinite(needed) && needed > plates + 1) {
       advice.push({ kind: 'method', text: `Separating ${pair} to 95 % needs at least ${Math.ceil(needed)} theoretical stages at total reflux; the column gives about ${(plates + 1).toFixed(0)} with the pot. Expect a large intermediate fraction.`, basis: 'Fenske equation (Fenske 1932)' });
@@ -45,19 +55,19 @@ export function adviseDistillation(boiling: readonly BoilingAtLab[], azeotropes:
       advice.push({ kind: 'caution', text: `No UNIFAC parameters for ${pair.pair.join(' + ')}: whether they form an azeotrope is unknown; the plan treats the pair with the model it has and may be wrong.`, basis: 'missing UNIFAC interaction parameters' });
     }
     for (const az of pair.azeotropes) {
-      advice.push({ kind: 'method', text: `${pair.pair.join(' and ')} form a ${az.kind} azeotrope near ${(az.tK - 273.15).toFixed(1)} degC (${(az.x1 * 100).toFixed(0)} mol % ${pair.pair[0]}): no column passes it; that cut comes over as the mixture.`, basis: 'original UNIFAC prediction' });
+      advice.push({ kind: 'method', text: `${pair.pair.join(' and ')} form a ${az.kind} azeotrope near ${figures.temperature(az.tK - 273.15)} (${figures.number(az.x1 * 100, 0)} mol % ${pair.pair[0]}): no column passes it; that cut comes over as the mixture.`, basis: 'original UNIFAC prediction' });
     }
   }
   const high = boiling.filter((b) => b.tK > 150 + 273.15);
   if (high.length > 0) {
-    advice.push({ kind: 'method', text: `${high.map((b) => b.compound.name).join(', ')} boil above 150 degC here: consider distilling under reduced pressure to avoid decomposition.`, basis: practice });
+    advice.push({ kind: 'method', text: `${high.map((b) => b.compound.name).join(', ')} boil above ${figures.temperature(150, 0)} here: consider distilling under reduced pressure to avoid decomposition.`, basis: practice });
     advice.push({ kind: 'caution', text: 'Vacuum work: use glassware rated for it, behind a shield, and never heat a closed system.', basis: practice });
   }
   const lowestAutoignition = boiling.filter((b) => b.compound.autoignitionK !== null).sort((a, b) => a.compound.autoignitionK! - b.compound.autoignitionK!)[0];
   if (lowestAutoignition) {
     const limitC = lowestAutoignition.compound.autoignitionK! - 273.15;
     const hot = heatSourceMaxK !== undefined && heatSourceMaxK >= lowestAutoignition.compound.autoignitionK!;
-    advice.push({ kind: 'caution', text: `${hot ? 'The heat source is hotter than' : 'Keep every hot surface well below'} the autoignition temperature of ${lowestAutoignition.compound.name} (about ${limitC.toFixed(0)} degC): ${hot ? 'its vapour can ignite without a spark. ' : ''}check the safety data sheet.`, basis: 'safety practice; autoignition values from memory' });
+    advice.push({ kind: 'caution', text: `${hot ? 'The heat source is hotter than' : 'Keep every hot surface well below'} the autoignition temperature of ${lowestAutoignition.compound.name} (about ${figures.temperature(limitC, 0)}): ${hot ? 'its vapour can ignite without a spark. ' : ''}check the safety data sheet.`, basis: 'safety practice; autoignition values from memory' });
   }
   for (const b of boiling) {
     if (b.compound.hazards.isPeroxideFormer) advice.push({ kind: 'caution', text: `${b.compound.name} can hold peroxides: test before heating, and never distil it to dryness.`, basis: 'safety practice (peroxide formers)' });

@@ -60,6 +60,8 @@ export function PrepareScreen({ store, settings, isRunGoing, onContinue, bridge:
   const reading = useMemo(() => readPrepareForm(form, separator, learned), [form, separator, learned]);
   const requestKey = reading.request ? JSON.stringify(reading.request) : null;
   const windows = edited && edited.key === requestKey ? edited.windows : null;
+  // The advice comes back in words with temperatures on the chemist's scale.
+  const figureStyle = { temperature: settings.temperatureUnit, pressure: settings.pressureUnit, decimalMark: separator };
 
   useEffect(() => {
     if (!reading.request) {
@@ -68,7 +70,7 @@ export function PrepareScreen({ store, settings, isRunGoing, onContinue, bridge:
       return;
     }
     const controller = new AbortController();
-    const request = { ...reading.request, windows };
+    const request = { ...reading.request, windows, figureStyle };
     const timer = setTimeout(() => {
       bridgeRef.current ??= new PlanningBridge();
       setPlanning(true);
@@ -93,7 +95,7 @@ export function PrepareScreen({ store, settings, isRunGoing, onContinue, bridge:
       controller.abort();
     };
     // The key stands for the request; windows by value.
-  }, [requestKey, JSON.stringify(windows)]);
+  }, [requestKey, JSON.stringify(windows), JSON.stringify(figureStyle)]);
 
   const changeWindows = (next: RunWindow[] | null) => {
     if (next === null || !requestKey) {

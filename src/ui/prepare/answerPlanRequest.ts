@@ -1,6 +1,6 @@
 import { toRunPlan } from '../../run/index.ts';
 import {
-  adviseDistillation, binaryTxy, findAzeotropes, findCompound, makeUserCompound, MissingUnifacDataError, planCuts, prepareMixture,
+  adviseDistillation, binaryTxy, figuresFor, findAzeotropes, findCompound, makeUserCompound, MissingUnifacDataError, planCuts, prepareMixture,
   type Compound, type CutPlan, type PreparedMixture, type ThermoModel,
 } from '../../science/index.ts';
 import type { CompoundChoice, PlanAnswer, PlanMessage, PlanRequest, PlanResult } from './planRequest.ts';
@@ -48,7 +48,7 @@ function heavyPart(request: PlanRequest): Omit<HeavyPart, 'key'> {
   const azeotropes = findAzeotropes(compounds, pressurePa, 'unifac');
   const byName = new Map(compounds.map((c) => [c.name, c]));
   const boiling = cutPlan.boilingPoints.map((b) => ({ compound: byName.get(b.compound)!, tK: b.tK }));
-  const advice = adviseDistillation(boiling, azeotropes, plates, cutPlan.minimumStages, heatSourceMaxK);
+  const advice = adviseDistillation(boiling, azeotropes, plates, cutPlan.minimumStages, heatSourceMaxK, figuresFor(request.figureStyle));
   let binary: PlanResult['binary'] = null;
   if (compounds.length === 2) {
     const curve = binaryTxy(mixture, pressurePa, 51);

@@ -1,5 +1,5 @@
 import type { RunPlan, RunWindow } from '../../run/index.ts';
-import type { Advice, PairAzeotropes, UserCompoundInput } from '../../science/index.ts';
+import type { Advice, FigureStyle, PairAzeotropes, UserCompoundInput } from '../../science/index.ts';
 
 /** A compound as the page names it to the worker: from the library, or the chemist's own. */
 export type CompoundChoice = { kind: 'library'; name: string } | { kind: 'user'; input: UserCompoundInput };
@@ -19,6 +19,8 @@ export interface PlanRequest {
   heatSourceMaxK: number | null;
   /** The chemist's edited receiver windows, or null for the planner's own. */
   windows: RunWindow[] | null;
+  /** Units and decimal mark for the advice's words (Settings); degC and a point when absent. */
+  figureStyle?: FigureStyle;
 }
 
 /** The predicted contents of one receiver. */
