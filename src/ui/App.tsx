@@ -335,7 +335,7 @@ export function App({ services, updates }: AppProps) {
         )}
         {screen === 'watch' && stage === 'connect' && (
           <LazyConnectSensor
-            decimalMark={figures.style.decimalMark}
+            figures={figures}
             typedDefaults={{ unit: settings.temperatureUnit === 'degF' ? 'F' : 'C', reminderEveryS: settings.readingReminderS }}
             onConnected={(connected) => {
               setSensor(connected);

@@ -28,13 +28,15 @@ export function checkTypedEntry(
   const cleaned = text.trim().replace(',', '.');
   if (!/^[+-]?(\d+\.?\d*|\.\d+)$/.test(cleaned)) return { kind: 'rejected', reason: 'type a number, for example 78.5' };
   const headC = toCelsius(Number(cleaned), unit);
-  const shown = `${cleaned} deg${unit}`;
+  const shown = `${text.trim()} deg${unit}`;
   if (headC < -273.15) return { kind: 'rejected', reason: `${shown} is below absolute zero` };
   if (headC < limits.lowC || headC > limits.highC) {
     return { kind: 'confirm', headC, reason: `${shown} is outside the usual range of a still head; store it anyway?` };
   }
   if (previousC !== undefined && Number.isFinite(previousC) && Math.abs(headC - previousC) > limits.jumpC) {
-    return { kind: 'confirm', headC, reason: `${shown} is ${Math.abs(headC - previousC).toFixed(0)} degC away from the last reading; store it anyway?` };
+    // Said on the keypad's own scale: a degF step is 1.8 times the degC step (NIST SP 811, B.8).
+    const step = Math.abs(headC - previousC) * (unit === 'F' ? 1.8 : 1);
+    return { kind: 'confirm', headC, reason: `${shown} is ${step.toFixed(0)} deg${unit} away from the last reading; store it anyway?` };
   }
   return { kind: 'ok', headC };
 }

@@ -12,6 +12,7 @@ import { LinePreview } from './LinePreview.tsx';
 import { ReadingPreview } from './ReadingPreview.tsx';
 import { BaudField, LineEndingField, ModbusForm, PollingForm, TypedForm, encodings, type ModbusFields, type PollingFields, type TypedFields } from './SetupForms.tsx';
 import { sourceChoices, type SourceChoice } from './sourceChoices.ts';
+import { figuresFor, type Figures } from '../../science/index.ts';
 import { parseDecimal, type DecimalSeparator } from '../units/index.ts';
 import './connect.css';
 
@@ -19,8 +20,8 @@ export interface ConnectSensorProps {
   onConnected(sensor: ConnectedSensor): void;
   onDemo(): void;
   onCancel(): void;
-  /** The decimal mark typed numbers use (Settings). */
-  decimalMark?: DecimalSeparator;
+  /** Figures and typed numbers in the chemist's units and decimal mark (Settings). */
+  figures?: Figures;
   /** The thermometer's scale and the reminder interval for typed readings, from Settings. */
   typedDefaults?: TypedFields;
   /** Tests and other browsers pass their own. */
@@ -99,7 +100,7 @@ const connectLabel: Record<string, string> = {
  * Connecting a sensor before heat on: which source (with what this browser allows, and why not
  * the rest), its settings, then a live look at what arrives before the chemist accepts it.
  */
-export function ConnectSensor({ onConnected, onDemo, onCancel, decimalMark = '.', typedDefaults, env, capabilities }: ConnectSensorProps) {
+export function ConnectSensor({ onConnected, onDemo, onCancel, figures = figuresFor(), typedDefaults, env, capabilities }: ConnectSensorProps) {
   const environment = useMemo(() => env ?? browserSensorEnvironment(), [env]);
   const choices = useMemo(
     () => sourceChoices(capabilities ?? describeCapabilities(fromNavigator(navigator, globalThis.isSecureContext))),
@@ -133,7 +134,7 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, decimalMark = '.'
     setBusy(true);
     let bridge: ReadingSource | undefined;
     try {
-      const setup = setupFrom(picked, { baudRate, lineEnding, modbus, polling, typed }, decimalMark);
+      const setup = setupFrom(picked, { baudRate, lineEnding, modbus, polling, typed }, figures.style.decimalMark);
       bridge = await createSensorBridge(setup, environment);
       await bridge.start();
       const sensor = { setup, bridge };
@@ -201,9 +202,9 @@ export function ConnectSensor({ onConnected, onDemo, onCancel, decimalMark = '.'
         <div class="sensor-preview">
           <p class="source-status" role="status">{connected.bridge.label}: {connected.bridge.status.message}</p>
           {isSerialLine ? (
-            <LinePreview bridge={connected.bridge as SerialLineSource} onFormat={setFormat} />
+            <LinePreview bridge={connected.bridge as SerialLineSource} onFormat={setFormat} figures={figures} />
           ) : (
-            <ReadingPreview bridge={connected.bridge} />
+            <ReadingPreview bridge={connected.bridge} figures={figures} />
           )}
           <button type="button" class="action action-start" disabled={isSerialLine && !format} onClick={accept}>
             Use this sensor

@@ -2,22 +2,24 @@ import { useEffect, useMemo, useState } from 'preact/hooks';
 import { detectFormats, type FormatCandidate } from '../../sensor/protocols/detectFormat.ts';
 import type { LineFormat } from '../../sensor/protocols/lineFormat.ts';
 import type { SerialLineSource } from '../../sensor/serialLineSource.ts';
+import type { Figures } from '../../science/index.ts';
 
 interface LinePreviewProps {
   bridge: SerialLineSource;
   onFormat(format: LineFormat | null): void;
+  figures: Figures;
 }
 
-const lastValueText = (candidate: FormatCandidate) => {
+const lastValueText = (candidate: FormatCandidate, figures: Figures) => {
   const value = [...candidate.valuesC].reverse().find((v) => !Number.isNaN(v));
-  return value === undefined ? 'no value' : `${value.toFixed(2)} °C`;
+  return value === undefined ? 'no value' : figures.temperature(value, 2);
 };
 
 /**
  * The first lines the device sent, as they arrive, with the ways they could be read: the chemist
  * picks the one that shows the head temperature (the best guess is picked already).
  */
-export function LinePreview({ bridge, onFormat }: LinePreviewProps) {
+export function LinePreview({ bridge, onFormat, figures }: LinePreviewProps) {
   const [lines, setLines] = useState<string[]>([]);
   const [picked, setPicked] = useState<string | null>(null);
   useEffect(() => {
@@ -58,7 +60,7 @@ export function LinePreview({ bridge, onFormat }: LinePreviewProps) {
                 onChange={() => setPicked(candidate.label)}
               />
               <span>
-                <strong>{candidate.label}</strong>: {lastValueText(candidate)}
+                <strong>{candidate.label}</strong>: {lastValueText(candidate, figures)}
                 <small> ({candidate.validCount} of {candidate.valuesC.length} lines{candidate.isTemperatureLike ? '' : ', unusual for a still head'})</small>
               </span>
             </label>

@@ -13,6 +13,8 @@ describe('checkTypedEntry', () => {
     expect(checkTypedEntry('785', 'C')).toMatchObject({ kind: 'confirm', headC: 785 });
     expect(checkTypedEntry('-30', 'C').kind).toBe('confirm');
     expect(checkTypedEntry('120', 'C', 60)).toMatchObject({ kind: 'confirm', reason: expect.stringMatching(/60 degC away/) });
+    // A 50 degC step typed in degF is a 90 degF step (x 1.8, NIST SP 811, B.8): 140 degF to 230 degF.
+    expect(checkTypedEntry('230', 'F', 60)).toMatchObject({ kind: 'confirm', reason: expect.stringMatching(/^230 degF is 90 degF away/) });
     expect(checkTypedEntry('80', 'C', 78).kind).toBe('ok');
   });
 
