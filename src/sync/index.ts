@@ -1,5 +1,5 @@
 export { Outbox, outboxKey } from './outbox.ts';
-export type { OutboxDeps } from './outbox.ts';
+export type { OutboxChannel, OutboxDeps } from './outbox.ts';
 export type { RunSyncStatus, SyncState, SyncTarget } from './syncStatus.ts';
 export { retryDelayMs } from './backoff.ts';
 export { uploadRun, revisionUrl } from './uploadRun.ts';
