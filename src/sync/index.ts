@@ -12,3 +12,8 @@ export type { SyncTriggerEnv } from './syncTriggers.ts';
 export { fetchLabRuns, fetchLabRun, LabRequestError } from './labClient.ts';
 export type { LabRunItem, LabRunQuery } from './labClient.ts';
 export { queueEndedRuns } from './queueEndedRuns.ts';
+export { labOutbox } from './labOutbox.ts';
+export type { LabOutboxEnv } from './labOutbox.ts';
+export { broadcastOutboxChannel } from './outboxChannel.ts';
+export { outboxSyncTag, requestBackgroundSync, flushForBackgroundSync } from './backgroundSync.ts';
+export type { ServiceWorkerContainerLike } from './backgroundSync.ts';
