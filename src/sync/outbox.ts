@@ -10,6 +10,8 @@ export interface OutboxChannel {
   post(status: RunSyncStatus): void;
   /** Returns the unsubscribe. */
   listen(listener: (status: RunSyncStatus) => void): () => void;
+  /** Lets go of the channel (after which post does nothing). */
+  close?(): void;
 }
 
 export interface OutboxDeps {
@@ -61,9 +63,10 @@ export class Outbox {
     this.#stopListening = deps.channel?.listen((status) => this.#tell(status)) ?? (() => undefined);
   }
 
-  /** Stops hearing other senders' changes. */
+  /** Stops hearing other senders' changes and lets go of the channel. */
   close(): void {
     this.#stopListening();
+    this.#deps.channel?.close?.();
   }
 
   /** Queues a run (when it ends, and again whenever it is amended). */

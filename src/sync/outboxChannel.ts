@@ -12,14 +12,21 @@ const isStatus = (value: unknown): value is RunSyncStatus =>
 export function broadcastOutboxChannel(name = 'cutbell-outbox'): OutboxChannel | undefined {
   if (typeof BroadcastChannel === 'undefined') return undefined;
   const channel = new BroadcastChannel(name);
+  let isClosed = false;
   return {
-    post: (status) => channel.postMessage(status),
+    post: (status) => {
+      if (!isClosed) channel.postMessage(status);
+    },
     listen(listener) {
       const onMessage = (event: MessageEvent) => {
         if (isStatus(event.data)) listener(event.data);
       };
       channel.addEventListener('message', onMessage);
       return () => channel.removeEventListener('message', onMessage);
+    },
+    close() {
+      isClosed = true;
+      channel.close();
     },
   };
 }
