@@ -92,8 +92,8 @@ try {
 const dataDir = resolve(values.data);
 const db = openLabDatabase(dataDir);
 const running = await startAppServer({ distDir: values.dist, port, host: values.host, api: { db, allowOrigins, maxBodyBytes, proxyAddresses, proxyHeader } });
-console.log(`Cutbell is being served at ${running.url} (lab records in ${dataDir})`);
 if (proxyAddresses.length > 0) console.log(`Phones are told apart by ${proxyHeader} on requests from ${proxyAddresses.join(', ')}`);
+console.log(`Cutbell is being served at ${running.url} (lab records in ${dataDir})`);
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.once(signal, () =>
     void running.close().finally(() => {

@@ -1,17 +1,23 @@
-import { afterAll, beforeAll, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, expect, it } from 'vitest';
 import type { Browser, BrowserContext } from 'playwright-core';
 import { launchChromium, phoneContext, untilServiceWorkerControls } from './support/browser.ts';
+import { startBuiltAppLab, type BuiltAppLab } from './support/builtAppLab.ts';
 import { startDemoRun } from './support/demoRun.ts';
 
+// A lab server of this test's own (its origin, data folder and token), so the run it sends is
+// the only one there and other tests' servers and registrations are not touched.
 let browser: Browser;
+let lab: BuiltAppLab;
 beforeAll(async () => {
+  lab = await startBuiltAppLab();
   browser = await launchChromium();
 });
 afterAll(async () => {
   await browser?.close();
+  await lab?.close();
 });
 
-const api = (path: string) => fetch(new URL(path, inject('baseUrl')), { headers: { authorization: `Bearer ${inject('syncToken')}` } });
+const api = (path: string) => fetch(new URL(path, lab.url), { headers: { authorization: `Bearer ${lab.token}` } });
 
 /**
  * Fires Background Sync's `sync` event at the app's service worker through the DevTools
@@ -21,7 +27,7 @@ const api = (path: string) => fetch(new URL(path, inject('baseUrl')), { headers:
 async function dispatchSyncEvent(context: BrowserContext, tag: string): Promise<void> {
   const blank = await context.newPage();
   const cdp = await context.newCDPSession(blank);
-  const origin = new URL(inject('baseUrl')).origin;
+  const origin = new URL(lab.url).origin;
   const registrationId = await new Promise<string>((resolve) => {
     cdp.on('ServiceWorker.workerRegistrationUpdated', ({ registrations }) => {
       const ours = registrations.find((r) => r.scopeURL === `${origin}/` && !r.isDeleted);
@@ -37,7 +43,7 @@ async function dispatchSyncEvent(context: BrowserContext, tag: string): Promise<
 it("the service worker's sync handler sends a run finished offline after the app's pages are closed", async () => {
   const context = await phoneContext(browser);
   const page = await context.newPage();
-  await page.goto(`${inject('baseUrl')}#sync=${encodeURIComponent(inject('syncToken'))}`);
+  await page.goto(`${lab.url}#sync=${encodeURIComponent(lab.token)}`);
   await untilServiceWorkerControls(page);
 
   await context.setOffline(true);
@@ -108,7 +114,7 @@ it("the service worker's sync handler sends a run finished offline after the app
 
   // Opened again, the app shows what the worker did: the run is synced, not sent twice.
   const again = await context.newPage();
-  await again.goto(inject('baseUrl'));
+  await again.goto(lab.url);
   await again.getByRole('button', { name: 'Runs' }).click();
   await again.locator(`[data-run-id="${runId}"] .sync-state[data-sync="synced"]`).waitFor();
   expect((await api(`api/runs/${runId}`)).headers.get('x-cutbell-revisions')).toBe('1');
