@@ -14,6 +14,11 @@ export default defineConfig({
       // and the wake lock. The app applies an update only between runs (see ui/UpdateNotice).
       registerType: 'prompt',
       injectRegister: false,
+      // A worker of our own (src/sw/sw.ts, built to sw.js): the precache below plus Background
+      // Sync of the outbox, which a generated worker cannot do.
+      strategies: 'injectManifest',
+      srcDir: 'src/sw',
+      filename: 'sw.ts',
       includeAssets: ['favicon.svg', 'icons/*.png', 'icons/*.svg'],
       manifest: {
         id: '/',
@@ -35,12 +40,10 @@ export default defineConfig({
           { src: 'icons/cutbell.svg', sizes: 'any', type: 'image/svg+xml', purpose: 'any' },
         ],
       },
-      workbox: {
+      injectManifest: {
         globPatterns: ['**/*.{js,css,html,svg,png,webmanifest,woff2}'],
-        navigateFallback: 'index.html',
-        // The sync API (issue: sync) is never served from the cache.
-        navigateFallbackDenylist: [/^\/api\//],
-        cleanupOutdatedCaches: true,
+        // One classic script with nothing to import: every browser with service workers runs it.
+        rollupFormat: 'iife',
       },
     }),
   ],

@@ -61,6 +61,7 @@ try {
 check('type check: app (DOM)', 'npx', ['tsc', '-p', 'tsconfig.json']);
 check('type check: pure core (no DOM)', 'npx', ['tsc', '-p', 'tsconfig.core.json']);
 check('type check: node side (server, cli, tests)', 'npx', ['tsc', '-p', 'tsconfig.node.json']);
+check('type check: service worker (no DOM)', 'npx', ['tsc', '-p', 'tsconfig.sw.json']);
 check('lint', 'npx', ['eslint', '.']);
 vitestProject('unit');
 

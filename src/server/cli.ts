@@ -15,7 +15,7 @@ try {
     process.exitCode = runTokenCommand(args, io);
   } else if (command === undefined || command === '--help' || command === 'help') {
     io.out(tokenHelp);
-    io.out('\nTo serve the app and the API: npm start -- [--port 8080] [--data DIR] [--allow-origin ORIGIN]');
+    io.out('\nTo serve the app and the API: npm start -- [--port 8080] [--data DIR] [--allow-origin ORIGIN] [--proxy-address ADDR] (npm start -- --help)');
   } else {
     throw new UsageError(`unknown command "${command}": the server's command line has "token"`);
   }

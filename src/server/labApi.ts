@@ -1,4 +1,5 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
+import { clientAddressOf, type ProxyHeader } from './clientAddress.ts';
 import { FailureLimiter } from './failureLimiter.ts';
 import type { LabDatabase } from './labDatabase.ts';
 import { parseListQuery, QueryError } from './listQuery.ts';
@@ -16,6 +17,13 @@ export interface LabApiOptions {
   /** Failed token checks allowed per client address per window before it gets 429. */
   failureLimit?: number;
   failureWindowMs?: number;
+  /**
+   * The lab's reverse proxies (addresses or CIDR ranges). Only a request whose socket comes from
+   * one of them is counted by the address in `proxyHeader` (clientAddress.ts); otherwise, and
+   * when this is empty, by the socket's own address, and no header is read.
+   */
+  proxyAddresses?: string[];
+  proxyHeader?: ProxyHeader;
   now?: () => number;
 }
 
@@ -47,6 +55,7 @@ export function createLabApi(options: LabApiOptions) {
   const allowOrigins = new Set(options.allowOrigins ?? []);
   const maxBodyBytes = options.maxBodyBytes ?? defaultMaxBodyBytes;
   const limiter = new FailureLimiter(options.failureLimit ?? 10, options.failureWindowMs ?? 60_000, options.now);
+  const clientAddress = clientAddressOf({ proxyAddresses: options.proxyAddresses, proxyHeader: options.proxyHeader });
 
   function corsHeaders(request: IncomingMessage): Record<string, string> {
     const origin = request.headers.origin;
@@ -60,7 +69,7 @@ export function createLabApi(options: LabApiOptions) {
 
   /** The caller's token, or the reply refusing it. */
   function authenticate(request: IncomingMessage): TokenInfo | Reply {
-    const address = request.socket.remoteAddress ?? 'unknown';
+    const address = clientAddress(request);
     const waitS = limiter.retryAfterS(address);
     if (waitS > 0) return problem(429, `too many failed token checks from this address: try again in ${waitS} s`, undefined, { 'retry-after': String(waitS) });
     const match = /^Bearer ([A-Za-z0-9._~+/=-]{1,200})$/.exec(request.headers.authorization ?? '');

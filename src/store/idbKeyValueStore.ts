@@ -1,7 +1,10 @@
-import { createStore, delMany, get, getMany, keys, setMany } from 'idb-keyval';
+import { createStore, delMany, get, getMany, keys, promisifyRequest, setMany } from 'idb-keyval';
 import type { KeyValueStore, StoreKey } from './keyValueStore.ts';
 
-/** The phone's IndexedDB through idb-keyval: one database, one object store for everything. */
+/**
+ * The phone's IndexedDB through idb-keyval: one database, one object store for everything.
+ * Works the same in the page and in the service worker (both have `indexedDB`).
+ */
 export function idbKeyValueStore(databaseName = 'cutbell', storeName = 'records'): KeyValueStore {
   const store = createStore(databaseName, storeName);
   return {
@@ -10,5 +13,31 @@ export function idbKeyValueStore(databaseName = 'cutbell', storeName = 'records'
     setMany: (entries) => setMany(entries, store),
     delMany: (list) => delMany(list, store),
     keys: () => keys(store),
+    update: <T>(key: StoreKey, change: (old: T | undefined) => T | undefined) =>
+      store('readwrite', (objectStore) =>
+        // idb-keyval's own update() always writes; this one writes only a change. A readwrite
+        // transaction holds the entry from the read to the commit against every other context.
+        new Promise<T | undefined>((resolve, reject) => {
+          const read = objectStore.get(key);
+          read.onerror = () => reject(read.error);
+          read.onsuccess = () => {
+            const old = read.result as T | undefined;
+            let next: T | undefined;
+            try {
+              next = change(old);
+            } catch (error) {
+              objectStore.transaction.abort();
+              reject(error);
+              return;
+            }
+            if (next === undefined || next === old) {
+              resolve(old);
+              return;
+            }
+            objectStore.put(next, key);
+            promisifyRequest(objectStore.transaction).then(() => resolve(next), reject);
+          };
+        }),
+      ),
   };
 }

@@ -11,6 +11,13 @@ export interface KeyValueStore {
   setMany(entries: [StoreKey, unknown][]): Promise<void>;
   delMany(keys: StoreKey[]): Promise<void>;
   keys(): Promise<StoreKey[]>;
+  /**
+   * Reads one entry and writes what `change` makes of it in one transaction, so no other writer
+   * (another tab, the service worker) can come between the read and the write. `change` must be
+   * synchronous; returning undefined or the very value it was given writes nothing. Resolves to
+   * the entry as it stands afterwards.
+   */
+  update<T>(key: StoreKey, change: (old: T | undefined) => T | undefined): Promise<T | undefined>;
 }
 
 /** An in-memory store with the same semantics (structured clone on write), for tests and fallbacks. */
@@ -51,5 +58,21 @@ export class MemoryStore implements KeyValueStore {
 
   async keys(): Promise<StoreKey[]> {
     return [...this.#keys.values()];
+  }
+
+  async update<T>(key: StoreKey, change: (old: T | undefined) => T | undefined): Promise<T | undefined> {
+    // No await between the read and the write: nothing else runs in between, as in one transaction.
+    const id = JSON.stringify(key);
+    const stored = this.#data.get(id);
+    const old = stored === undefined ? undefined : (structuredClone(stored) as T);
+    const next = change(old);
+    if (next === undefined || next === old) return old;
+    if (this.failWrites > 0) {
+      this.failWrites -= 1;
+      throw new DOMException('The quota has been exceeded.', 'QuotaExceededError');
+    }
+    this.#data.set(id, structuredClone(next));
+    this.#keys.set(id, key);
+    return next;
   }
 }

@@ -1,5 +1,5 @@
 export { Outbox, outboxKey } from './outbox.ts';
-export type { OutboxDeps } from './outbox.ts';
+export type { OutboxChannel, OutboxDeps } from './outbox.ts';
 export type { RunSyncStatus, SyncState, SyncTarget } from './syncStatus.ts';
 export { retryDelayMs } from './backoff.ts';
 export { uploadRun, revisionUrl } from './uploadRun.ts';
@@ -12,3 +12,8 @@ export type { SyncTriggerEnv } from './syncTriggers.ts';
 export { fetchLabRuns, fetchLabRun, LabRequestError } from './labClient.ts';
 export type { LabRunItem, LabRunQuery } from './labClient.ts';
 export { queueEndedRuns } from './queueEndedRuns.ts';
+export { labOutbox } from './labOutbox.ts';
+export type { LabOutboxEnv } from './labOutbox.ts';
+export { broadcastOutboxChannel } from './outboxChannel.ts';
+export { outboxSyncTag, requestBackgroundSync, flushForBackgroundSync } from './backgroundSync.ts';
+export type { ServiceWorkerContainerLike } from './backgroundSync.ts';

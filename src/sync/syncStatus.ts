@@ -20,6 +20,13 @@ export interface RunSyncStatus {
   updatedAtMs: number;
   /** When the server last confirmed a revision. Units: ms since 1970 */
   syncedAtMs: number | null;
+  /**
+   * While `sending`: which sender (a tab, or the service worker) holds the run, and until when
+   * its claim stands; another sender may take the run over only after that. Absent on entries
+   * written before claims were kept. Units: ms since 1970
+   */
+  senderId?: string | null;
+  leaseUntilMs?: number | null;
 }
 
 /** Where and as whom to send: the lab server's address (ending in "/") and this phone's token. */

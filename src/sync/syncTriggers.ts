@@ -16,7 +16,8 @@ const maxWaitMs = 15 * 60_000;
 /**
  * Flushes the outbox at start-up, when the network comes back (`online`), when the page becomes
  * visible, as soon as a run is queued, and when the next backoff retry is due. Returns stop().
- * Background Sync is not used: it needs a service worker of our own (see src/sync/README.md).
+ * The page's triggers only; Background Sync is asked for by the outbox's onUnreachable and
+ * answered in the service worker (src/sync/README.md).
  */
 export function startSyncTriggers(outbox: Outbox, env: SyncTriggerEnv): () => void {
   let timer: unknown = null;

@@ -4,8 +4,11 @@ export type UploadResult =
   | { kind: 'stored' }
   /** The server holds this revision with other content: send the run as a new revision. */
   | { kind: 'conflict'; reason: string }
-  /** Worth trying again later (no network, server down or busy). */
-  | { kind: 'retry'; reason: string; retryAfterMs: number | null }
+  /**
+   * Worth trying again later: no network or the server down (`isUnreachable`: no answer at
+   * all), or the server busy or failing.
+   */
+  | { kind: 'retry'; reason: string; retryAfterMs: number | null; isUnreachable: boolean }
   /** Trying again cannot help until the token, the run or the server changes. */
   | { kind: 'refused'; reason: string };
 
@@ -24,6 +27,9 @@ async function serverReason(response: Response): Promise<string> {
   return `HTTP ${response.status} ${response.statusText}`.trim();
 }
 
+/** How long one upload may take before it is given up. Units: ms */
+export const defaultUploadTimeoutMs = 120_000;
+
 /** PUTs one revision of a run record. Never throws: every outcome is a result. */
 export async function uploadRun(
   fetchFn: typeof fetch,
@@ -31,7 +37,7 @@ export async function uploadRun(
   runId: string,
   revision: number,
   body: string,
-  timeoutMs = 120_000,
+  timeoutMs = defaultUploadTimeoutMs,
 ): Promise<UploadResult> {
   let response: Response;
   try {
@@ -43,7 +49,7 @@ export async function uploadRun(
     });
   } catch (error) {
     const detail = error instanceof Error ? error.message : String(error);
-    return { kind: 'retry', reason: `the lab server could not be reached (${detail})`, retryAfterMs: null };
+    return { kind: 'retry', reason: `the lab server could not be reached (${detail})`, retryAfterMs: null, isUnreachable: true };
   }
   if (response.ok) {
     await response.body?.cancel().catch(() => undefined);
@@ -53,7 +59,7 @@ export async function uploadRun(
   if (response.status === 409) return { kind: 'conflict', reason };
   if (response.status === 429 || response.status === 408 || response.status >= 500) {
     const after = Number(response.headers.get('retry-after'));
-    return { kind: 'retry', reason: `the lab server is busy or failing: ${reason}`, retryAfterMs: after > 0 ? after * 1000 : null };
+    return { kind: 'retry', reason: `the lab server is busy or failing: ${reason}`, retryAfterMs: after > 0 ? after * 1000 : null, isUnreachable: false };
   }
   if (response.status === 401 || response.status === 403) {
     return { kind: 'refused', reason: `the lab server refused this phone's token: ${reason}. Check Settings.` };

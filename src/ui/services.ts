@@ -3,8 +3,8 @@ import {
 } from '../alerts/index.ts';
 import { browserClock } from '../sensor/clock.ts';
 import { createSignalWatcher, type SessionDeps } from '../session/index.ts';
-import { checkStorage, idbKeyValueStore, loadSettings, type KeyValueStore, type StorageHealth } from '../store/index.ts';
-import { Outbox, runJson, syncTargetFrom } from '../sync/index.ts';
+import { checkStorage, idbKeyValueStore, type KeyValueStore, type StorageHealth } from '../store/index.ts';
+import { labOutbox, requestBackgroundSync, type Outbox } from '../sync/index.ts';
 
 /** The browser's adapters, made once for the app and handed down (components never build them). */
 export interface AppServices {
@@ -23,12 +23,14 @@ export function createBrowserServices(): AppServices {
   const notifier = new AlarmNotifier(browserNotifierDeps());
   const alerter = new Alerter({ speech: new SpeechAnnouncer(), tone: new TonePlayer(), vibrate: vibrator().vibrate, notifier });
   const wakeLock = new ScreenWakeLock(browserWakeLockDeps());
-  const outbox = new Outbox({
+  const outbox = labOutbox({
     store,
     fetch: (input, init) => fetch(input, init),
-    target: async () => syncTargetFrom(await loadSettings(store), location.origin),
-    runJson: (runId) => runJson(store, runId),
+    origin: location.origin,
     nowMs: () => Date.now(),
+    // Offline or the server down: where the browser can, the service worker sends the run when
+    // the network is back, even if the app has been closed by then (src/sync/README.md).
+    onUnreachable: () => void requestBackgroundSync(globalThis.navigator?.serviceWorker),
   });
   return {
     store,

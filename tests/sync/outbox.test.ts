@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { MemoryStore } from '../../src/store/index.ts';
-import { Outbox, outboxKey, type RunSyncStatus } from '../../src/sync/index.ts';
+import { Outbox, outboxKey, type OutboxChannel, type OutboxDeps, type RunSyncStatus } from '../../src/sync/index.ts';
 
 interface Call {
   url: string;
@@ -210,5 +210,159 @@ describe('Outbox', () => {
 
   it('queueRun refuses an empty id', async () => {
     await expect(makeOutbox(ok).outbox.queueRun('')).rejects.toThrow(RangeError);
+  });
+});
+
+/** A BroadcastChannel stand-in: what one member posts reaches every other member. */
+function channelHub() {
+  const members = new Set<(status: RunSyncStatus) => void>();
+  return (): OutboxChannel => {
+    let own: ((status: RunSyncStatus) => void) | null = null;
+    return {
+      post: (status) => {
+        for (const member of members) if (member !== own) member(structuredClone(status));
+      },
+      listen: (listener) => {
+        own = listener;
+        members.add(listener);
+        return () => members.delete(listener);
+      },
+    };
+  };
+}
+
+/** The page and the service worker: two outboxes on one store, one lab server that answers after a moment. */
+type SenderCall = Call & { sender: string };
+
+function twoSenders(answer: (call: SenderCall, n: number) => Response | Error = ok) {
+  const store = new MemoryStore();
+  const clock = { ms: 1_000_000 };
+  const runs = new Map<string, string>([['run-a', '{"id":"run-a","v":1}'], ['run-b', '{"id":"run-b"}']]);
+  const calls: SenderCall[] = [];
+  const hub = channelHub();
+  const onCall: { before?: (call: SenderCall) => Promise<void> | void } = {};
+  const make = (sender: string, extra: Partial<OutboxDeps> = {}) =>
+    new Outbox({
+      store,
+      fetch: (async (input: RequestInfo | URL, init?: RequestInit) => {
+        const call = { url: String(input), method: init?.method ?? 'GET', body: String(init?.body ?? ''), authorization: null, sender };
+        calls.push(call);
+        await new Promise((resolve) => setTimeout(resolve, 5));
+        await onCall.before?.(call);
+        const reply = answer(call, calls.length);
+        if (reply instanceof Error) throw reply;
+        return reply;
+      }) as typeof fetch,
+      target: async () => ({ serverUrl: 'http://lab.test:8080/', token: 'cb1.phone' }),
+      runJson: async (id) => runs.get(id) ?? null,
+      nowMs: () => clock.ms,
+      channel: hub(),
+      senderId: sender,
+      uploadTimeoutMs: 1000,
+      ...extra,
+    });
+  return { store, clock, runs, calls, onCall, page: make('page'), worker: make('worker'), make };
+}
+
+const revisionsSent = (calls: Call[]) => calls.map((c) => `${c.url.split('/').at(-3)}@${c.url.split('/').at(-1)}`);
+
+describe('Outbox shared by two senders (a tab and the service worker)', () => {
+  it('both flushing at once send each run once', async () => {
+    const { page, worker, calls } = twoSenders();
+    await page.queueRun('run-a');
+    await page.queueRun('run-b');
+    await Promise.all([page.flush(true), worker.flush(true)]);
+    expect(revisionsSent(calls).sort()).toEqual(['run-a@1', 'run-b@1']);
+    expect(await page.stateOf('run-a')).toMatchObject({ state: 'synced', syncedRevision: 1, senderId: null, leaseUntilMs: null });
+    expect((await page.stateOf('run-b'))?.state).toBe('synced');
+  });
+
+  it('an amendment queued in the page while the worker uploads is not lost: it goes as revision 2', async () => {
+    const { page, worker, calls, runs, onCall } = twoSenders();
+    await page.queueRun('run-a');
+    onCall.before = async (call) => {
+      if (call.sender !== 'worker' || !call.url.endsWith('/1')) return;
+      runs.set('run-a', '{"id":"run-a","v":2}');
+      expect((await page.queueRun('run-a')).revision).toBe(2);
+    };
+    await worker.flush(true);
+    expect(revisionsSent(calls)).toEqual(['run-a@1', 'run-a@2']);
+    expect(calls[1]!.body).toBe('{"id":"run-a","v":2}');
+    expect(await page.stateOf('run-a')).toMatchObject({ state: 'synced', revision: 2, syncedRevision: 2 });
+  });
+
+  it('an amendment queued at the very moment the worker records its upload is not lost either', async () => {
+    let amended: Promise<RunSyncStatus> | null = null;
+    const { page, worker, calls, runs } = twoSenders((call) => {
+      if (call.sender === 'worker' && call.url.endsWith('/1')) {
+        runs.set('run-a', '{"id":"run-a","v":2}');
+        // Not awaited: the page's write races the worker's write of the outcome.
+        amended = page.queueRun('run-a');
+      }
+      return ok();
+    });
+    await page.queueRun('run-a');
+    await worker.flush(true);
+    expect((await amended!).revision).toBe(2);
+    await Promise.all([page.flush(true), worker.flush(true)]);
+    expect(revisionsSent(calls)).toEqual(['run-a@1', 'run-a@2']);
+    expect(await page.stateOf('run-a')).toMatchObject({ state: 'synced', revision: 2, syncedRevision: 2 });
+  });
+
+  it('a run another sender holds is left alone until its claim runs out, then taken over', async () => {
+    const { store, page, calls, clock } = twoSenders();
+    const queued = await page.queueRun('run-a');
+    await store.setMany([[outboxKey('run-a'), { ...queued, state: 'sending', senderId: 'worker', leaseUntilMs: clock.ms + 30_000 }]]);
+    await page.flush(true);
+    expect(calls).toHaveLength(0);
+    expect(await page.nextDueMs()).toBe(clock.ms + 30_000);
+    clock.ms += 30_000;
+    await page.flush();
+    expect(revisionsSent(calls)).toEqual(['run-a@1']);
+    expect((await page.stateOf('run-a'))?.state).toBe('synced');
+  });
+
+  it("a late failure from a sender whose claim ran out does not undo the other sender's success", async () => {
+    let isNetworkDownForWorker = true;
+    const { page, worker, calls, clock, onCall } = twoSenders((call) => (call.sender === 'worker' && isNetworkDownForWorker ? new TypeError('Failed to fetch') : ok()));
+    await page.queueRun('run-a');
+    onCall.before = async (call) => {
+      if (call.sender !== 'worker') return;
+      // The worker's upload hangs past its claim; the page takes the run over and sends it.
+      clock.ms += 61_001 + 1000;
+      await page.flush(true);
+    };
+    await worker.flush(true);
+    isNetworkDownForWorker = false;
+    expect(calls.map((c) => c.sender)).toEqual(['worker', 'page']);
+    expect(await page.stateOf('run-a')).toMatchObject({ state: 'synced', syncedRevision: 1, reason: null });
+  });
+
+  it("each sender's subscribers hear the other sender's changes", async () => {
+    const { page, worker } = twoSenders();
+    const heard: string[] = [];
+    page.subscribe((s) => heard.push(`${s.runId}:${s.state}`));
+    await page.queueRun('run-a');
+    await worker.flush(true);
+    expect(heard).toEqual(['run-a:queued', 'run-a:sending', 'run-a:synced']);
+    page.close();
+    await page.queueRun('run-b');
+    await worker.flush(true);
+    expect(heard).toEqual(['run-a:queued', 'run-a:sending', 'run-a:synced', 'run-b:queued']);
+  });
+
+  it('onUnreachable is called when an upload gets no answer, not when the server answers 503', async () => {
+    let isUp = false;
+    const { make } = twoSenders(() => (isUp ? problem(503, 'down') : new TypeError('Failed to fetch')));
+    let unreachable = 0;
+    const page = make('page-2', { onUnreachable: () => (unreachable += 1) });
+    await page.queueRun('run-a');
+    await page.flush(true);
+    expect(unreachable).toBe(1);
+    expect((await page.stateOf('run-a'))?.reason).toMatch(/could not be reached/);
+    isUp = true;
+    await page.flush(true);
+    expect(unreachable).toBe(1);
+    expect((await page.stateOf('run-a'))?.reason).toMatch(/busy or failing/);
   });
 });
