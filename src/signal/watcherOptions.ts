@@ -34,7 +34,7 @@ export interface WatcherOptions {
 }
 
 export const defaultWatcherOptions: Readonly<WatcherOptions> = Object.freeze({
-  targetFalseAlarmIntervalH: 200,
+  targetFalseAlarmIntervalH: 50,
   breakthroughReferenceC: 0.5,
   breakthroughMinRiseC: 1.0,
   vapourRiseC: 6,
