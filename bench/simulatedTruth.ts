@@ -12,7 +12,7 @@ import { createRandom } from '../src/science/sensorModel/index.ts';
 import type { PurityInterval, RunTruth, TruthEvent } from '../src/signal/scoring/index.ts';
 import type { CorpusRunSpec, TruthSource, TruthSourceResult } from './corpus.ts';
 
-const VERSION = 'sim-truth-1';
+const VERSION = 'sim-truth-2';
 const CACHE_DIR = '.bench/simulated-truth';
 
 /** How a spec becomes a simulation: charge, reflux, boil-up and the heat schedule. */
@@ -68,6 +68,25 @@ function simulate(plan: SimulationPlan, spec: CorpusRunSpec, heat: (fullW: numbe
   });
 }
 
+/**
+ * When vapour reached the thermometer. The simulator flags it once the vapour flow into the
+ * head passes its threshold (vapourSeenMolPerS), but the thinner vapour ahead of that already
+ * bathes the bulb (the model weights its heat by the squared flow ratio), and in a brisk run
+ * the bulb has climbed most of the way to the vapour's temperature, tens of degrees, before
+ * the flag. In the model nothing else can warm the bulb: it and the head glass start at room
+ * temperature and the glass is heated only by vapour condensing on it. So the first warming of
+ * the noise-free reading by 1 degC above its heat-on value is the vapour at the bulb; the flag
+ * when that comes first. Units: s.
+ */
+function vapourArrivalS(run: BatchStillRun): number | null {
+  const flagS = run.annotations.vapourArrivalS;
+  if (flagS === null) return null;
+  const { timeS, headK } = run.trace;
+  const roomK = headK[0]!;
+  for (let i = 0; i < timeS.length && timeS[i]! < flagS; i++) if (headK[i]! >= roomK + 1) return timeS[i]!;
+  return flagS;
+}
+
 /** Noise-free truth from a run, cut at endS: purity intervals, vapour, and the stalls given. */
 function truthFrom(run: BatchStillRun, plan: SimulationPlan, endS: number, stalls: TruthEvent[], extraEvents: TruthEvent[] = []): RunTruth {
   const n = Math.min(run.trace.timeS.length, Math.floor(endS) + 1);
@@ -84,7 +103,8 @@ function truthFrom(run: BatchStillRun, plan: SimulationPlan, endS: number, stall
     if (stopS - startS >= 60) purityIntervals.push({ startS, endS: stopS, component: plan.compounds[p.component]!.name });
   }
   const events: TruthEvent[] = [...extraEvents];
-  if (a.vapourArrivalS !== null && a.vapourArrivalS < endS) events.push({ kind: 'vapour', timeS: a.vapourArrivalS });
+  const arrivalS = vapourArrivalS(run);
+  if (arrivalS !== null && arrivalS < endS) events.push({ kind: 'vapour', timeS: arrivalS });
   events.push(...stalls.filter((s) => s.timeS < endS));
   return { timeS, headC, purityIntervals, events };
 }
@@ -101,7 +121,7 @@ function build(spec: CorpusRunSpec): RunTruth {
       // A mantle left low: the pot barely boils for 40-60 min, then the chemist turns it up.
       const upS = 2400 + 1200 * r.uniform();
       const run = simulate(plan, spec, (w) => [{ fromS: 0, heatW: 0.15 * w }, { fromS: upS, heatW: w }], durationS + upS);
-      const arrival = run.annotations.vapourArrivalS;
+      const arrival = vapourArrivalS(run);
       const end = endBeforeDry(run, durationS + upS);
       const slow: TruthEvent[] = arrival !== null && arrival > 900 ? [{ kind: 'stall', timeS: arrival, cause: 'slow-start' }] : [];
       return truthFrom(run, plan, end, [], slow);

@@ -1,4 +1,5 @@
 import type { AlarmKind } from '../run/index.ts';
+import { sensorSilentWording as silent, wordWatchEvent, type AlarmCategory, type EventKind, type FaultReason, type StallReason } from '../signal/index.ts';
 import type { WatcherEvent } from './types.ts';
 
 export interface AlarmWording {
@@ -7,68 +8,27 @@ export interface AlarmWording {
   action: string;
 }
 
-const degrees = (c: number | null) => (c === null ? '' : ` at ${c.toFixed(1)} degrees`);
+// The signal layer's categories are the alarm book's kinds; this fails to compile if they part.
+const sameKinds: AlarmCategory extends AlarmKind ? (AlarmKind extends AlarmCategory ? true : never) : never = true;
+void sameKinds;
+
+const EVENT_KINDS: ReadonlySet<string> = new Set<EventKind>(['vapour', 'plateau', 'breakthrough', 'stall', 'sensor-fault', 'cut']);
+const REASONS: ReadonlySet<string> = new Set<StallReason | FaultReason>(['no-vapour', 'falling-away', 'creeping', 'no-valid-readings', 'open-thermocouple', 'erratic']);
 
 /**
- * Turns a watcher event into an alarm that names its action (ISA-18.2: an alarm without an
- * action is not an alarm), or into information, or nothing. Our own wording.
+ * Turns a watcher event into an alarm that names its action, or into information, or nothing
+ * (a kind the watcher does not raise). The words are the signal layer's (`wordWatchEvent`), the
+ * ones `analyze` prints; without a receiver in the event, `nextReceiver` is the one to change to.
  */
 export function wordEvent(event: WatcherEvent, nextReceiver: number): { alarm: AlarmWording } | { info: string } | null {
-  switch (event.event) {
-    case 'vapour':
-      return { info: 'Vapour has reached the thermometer' };
-    case 'plateau':
-      return { info: `Steady${degrees(event.head_c)}` };
-    case 'cut':
-      return {
-        alarm: {
-          kind: 'change-receiver',
-          message: `Planned cut reached${degrees(event.head_c)}`,
-          action: `Change to receiver ${typeof event.receiver === 'number' ? event.receiver : nextReceiver}`,
-        },
-      };
-    case 'breakthrough':
-      return {
-        alarm: {
-          kind: 'change-receiver',
-          message: `Temperature rising off the plateau${degrees(event.head_c)}`,
-          action: `Change to receiver ${typeof event.receiver === 'number' ? event.receiver : nextReceiver}`,
-        },
-      };
-    case 'stall': {
-      const reason = String(event.reason ?? '');
-      if (/fall|dry|lost/i.test(reason)) {
-        return {
-          alarm: {
-            kind: 'pot-low',
-            message: 'The head temperature is falling away',
-            action: 'Check the heat. If the pot is nearly dry, stop heating: never distil to dryness',
-          },
-        };
-      }
-      return {
-        alarm: {
-          kind: 'check-heat',
-          message: /no.?vapou?r|cold/i.test(reason) ? 'Vapour is not reaching the head' : 'The head temperature is not settling',
-          action: 'Check the heat, the insulation of the column and the joints',
-        },
-      };
-    }
-    case 'sensor-fault':
-      return {
-        alarm: {
-          kind: 'sensor-lost',
-          message: `Sensor problem${event.reason ? `: ${String(event.reason).replace(/-/g, ' ')}` : ''}`,
-          action: 'Check the thermocouple and its cable; read the thermometer by eye meanwhile',
-        },
-      };
-    default:
-      return null;
-  }
+  if (!EVENT_KINDS.has(event.event)) return null;
+  const kind = event.event as EventKind;
+  const reason = typeof event.reason === 'string' && REASONS.has(event.reason) ? (event.reason as StallReason | FaultReason) : undefined;
+  const isChange = kind === 'breakthrough' || kind === 'cut';
+  const receiver = typeof event.receiver === 'number' ? event.receiver : isChange ? nextReceiver : undefined;
+  const worded = wordWatchEvent(kind, event.head_c ?? Number.NaN, reason, receiver);
+  if (worded.category === null) return { info: worded.message };
+  return { alarm: { kind: worded.category, message: worded.message, action: worded.action } };
 }
 
-export const sensorSilentWording: AlarmWording = {
-  kind: 'sensor-lost',
-  message: 'No readings from the sensor',
-  action: 'Check the cable or connection, then reconnect',
-};
+export const sensorSilentWording: AlarmWording = { kind: silent.category, message: silent.message, action: silent.action };

@@ -5,5 +5,6 @@ export { resolveWatcherOptions, defaultWatcherOptions, type WatcherOptions } fro
 export { normaliseCutPlan } from './cutPlan.ts';
 export { parseCutPlan } from './parseCutPlan.ts';
 export { cusumThresholdForMeanTime, cusumMeanTimeToFalseAlarmS } from './cusumThreshold.ts';
+export { wordWatchEvent, sensorSilentWording, isAlarmKind, type AlarmCategory, type EventWording } from './eventWording.ts';
 export type { WatcherState } from './watcherState.ts';
 export type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchEvent, WatchState } from './types.ts';

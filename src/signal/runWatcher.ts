@@ -1,4 +1,4 @@
-import { actionFor, isAlarmKind } from './alarmText.ts';
+import { isAlarmKind, wordWatchEvent } from './eventWording.ts';
 import { normaliseCutPlan } from './cutPlan.ts';
 import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
 import { onAcceptedReading } from './stateMachine.ts';
@@ -194,7 +194,8 @@ export class RunWatcher {
       if (last !== undefined && timeS - last < s.options.minAlarmGapS) return false;
       s.lastAlarmS[kind] = timeS;
     }
-    const event: WatchEvent = { timeS, kind, headC, isAlarm, action: actionFor(kind, reason, receiver) };
+    const { message, action } = wordWatchEvent(kind, headC, reason, receiver);
+    const event: WatchEvent = { timeS, kind, headC, isAlarm, message, action };
     if (reason !== undefined) event.reason = reason;
     if (receiver !== undefined) event.receiver = receiver;
     this.events.push(event);

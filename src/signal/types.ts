@@ -25,6 +25,8 @@ export interface WatchEvent {
   headC: number;
   /** An alarm needs the chemist to act; the rest is information, shown once. */
   isAlarm: boolean;
+  /** What happened, in a few words (eventWording.ts, the app's wording too). */
+  message: string;
   /** What to do, in a few words (every alarm names its action). */
   action: string;
   reason?: StallReason | FaultReason;

@@ -38,6 +38,11 @@ export interface WatcherState {
   sagSinceS: number;
   cusumCS: number;
   residualPowerC2: number;
+  /** Mean square of the fast slope on the plateau, its noise. Absent in older saves. Units: (degC/s)^2. */
+  fastSlopePowerC2PerS2?: number;
+  /** The plateau's own course (level and creep), fitted to its readings near the line.
+   * Absent in states saved before it existed. */
+  course?: EwRegression;
   /** Level of the plateau the last breakthrough left (NaN before any). Units: degC. */
   brokeFromC: number;
   /** The current plateau is a shoulder of the climb out of that one: it raises no breakthrough. */
@@ -60,7 +65,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): 
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30),
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
-    residualPowerC2: NaN, brokeFromC: NaN, isShoulder: false,
+    residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
     hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
   };
 }

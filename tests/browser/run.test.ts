@@ -31,6 +31,8 @@ it('goes through vapour, plateau, a breakthrough alarm, receiver 2 and the end, 
   const banner = page.getByRole('alertdialog');
   await banner.waitFor({ timeout: 30_000 });
   expect(await banner.textContent()).toMatch(/Change to receiver 2/);
+  // The banner shows on the raise; the alarm is said on the session's next tick (250 ms).
+  await page.waitForFunction(() => (window as unknown as { __spoken: string[] }).__spoken.some((s) => /Change to receiver 2/.test(s)), null, { timeout: 5000 });
   expect((await spoken(page)).filter((s) => /Change to receiver 2/.test(s)).length).toBeGreaterThanOrEqual(1);
   expect(await page.evaluate(() => (window as unknown as { __tones: number }).__tones)).toBeGreaterThan(0);
 

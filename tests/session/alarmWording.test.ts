@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { wordEvent } from '../../src/session/index.ts';
+import { sensorSilentWording, wordEvent } from '../../src/session/index.ts';
+import { analyzeReadings, wordWatchEvent } from '../../src/signal/index.ts';
 
 describe('wordEvent', () => {
   it('makes a breakthrough an alarm that names the next receiver', () => {
@@ -13,15 +14,27 @@ describe('wordEvent', () => {
     expect(worded && 'alarm' in worded && worded.alarm.action).toBe('Change to receiver 3');
   });
 
-  it('makes a head falling away a pot-low alarm that says never to distil to dryness', () => {
+  it('makes a head falling away a pot-low alarm that says never to distil to dryness and defers to the lab', () => {
     const worded = wordEvent({ time_s: 1, event: 'stall', head_c: 70, reason: 'falling-away' }, 2);
     expect(worded && 'alarm' in worded && worded.alarm.kind).toBe('pot-low');
     expect(worded && 'alarm' in worded && worded.alarm.action).toMatch(/never distil to dryness/);
+    expect(worded && 'alarm' in worded && worded.alarm.action).toMatch(/lab's procedures/);
+  });
+
+  it('gives a stall with a reason it does not know the cautious pot-low words', () => {
+    const worded = wordEvent({ time_s: 1, event: 'stall', head_c: 70, reason: 'something-else' }, 2);
+    expect(worded && 'alarm' in worded && worded.alarm.kind).toBe('pot-low');
   });
 
   it('makes no vapour after long heating a check-heat alarm', () => {
     const worded = wordEvent({ time_s: 1, event: 'stall', head_c: 22, reason: 'no-vapour' }, 2);
     expect(worded && 'alarm' in worded && worded.alarm).toMatchObject({ kind: 'check-heat', message: 'Vapour is not reaching the head' });
+  });
+
+  it('makes erratic readings a sensor alarm that names flooding, with its caution', () => {
+    const worded = wordEvent({ time_s: 1, event: 'sensor-fault', head_c: null, reason: 'erratic' }, 2);
+    expect(worded && 'alarm' in worded && worded.alarm.kind).toBe('sensor-lost');
+    expect(worded && 'alarm' in worded && worded.alarm.action).toMatch(/flooding: turn the heat down.*lab's procedures/);
   });
 
   it('makes a sensor fault a sensor alarm with its reason, and vapour and plateaus information', () => {
@@ -30,5 +43,24 @@ describe('wordEvent', () => {
     expect(wordEvent({ time_s: 1, event: 'vapour', head_c: 60 }, 2)).toEqual({ info: 'Vapour has reached the thermometer' });
     expect(wordEvent({ time_s: 1, event: 'plateau', head_c: 77.06 }, 2)).toEqual({ info: 'Steady at 77.1 degrees' });
     expect(wordEvent({ time_s: 1, event: 'something-new', head_c: 1 }, 2)).toBeNull();
+  });
+
+  it('says what the watcher says: the app and analyze share one wording', () => {
+    for (const [kind, reason] of [['breakthrough'], ['stall', 'falling-away'], ['stall', 'creeping'], ['stall', 'no-vapour'], ['sensor-fault', 'no-valid-readings']] as const) {
+      const fromSignal = wordWatchEvent(kind, 64.2, reason, 3);
+      const worded = wordEvent({ time_s: 5, event: kind, head_c: 64.2, reason, receiver: 3 }, 9);
+      expect(worded).toEqual({ alarm: { kind: fromSignal.category, message: fromSignal.message, action: fromSignal.action } });
+    }
+    // The watcher's own events carry the same words (a two-step trace: room, then vapour).
+    const timeS = Float64Array.from({ length: 200 }, (_, i) => i);
+    const headC = timeS.map((t) => (t < 100 ? 21 : 60));
+    const vapour = analyzeReadings(timeS, headC).find((e) => e.kind === 'vapour')!;
+    expect(vapour.message).toBe('Vapour has reached the thermometer');
+    expect(vapour.action).toBe(wordWatchEvent('vapour', vapour.headC).action);
+  });
+
+  it('the silent-sensor alarm is a sensor alarm that says how to carry on', () => {
+    expect(sensorSilentWording.kind).toBe('sensor-lost');
+    expect(sensorSilentWording.action).toMatch(/reconnect/);
   });
 });

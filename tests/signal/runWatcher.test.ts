@@ -205,3 +205,67 @@ describe('RunWatcher on shapes the column simulator makes', () => {
     expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau', 'breakthrough', 'plateau']);
   });
 });
+
+describe('RunWatcher breakthrough timing', () => {
+  // Invented profiles (no source needed), through a board as above: 0.5 s readings, 0.15 degC
+  // noise, 0.25 degC steps, a draught of 0.1 degC over 40 s.
+  function through(points: [number, number][], seed = 5): { timeS: Float64Array; headC: Float64Array; truthC: (t: number) => number } {
+    const end = points.at(-1)![0];
+    const truthC = (t: number): number => {
+      const k = points.findIndex(([pt]) => pt > t);
+      if (k <= 0) return points[k < 0 ? points.length - 1 : 0]![1];
+      const [t0, v0] = points[k - 1]!, [t1, v1] = points[k]!;
+      return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
+    };
+    const timeS = Float64Array.from({ length: end + 1 }, (_, i) => i);
+    const r = sensorReadings(timeS, timeS.map(truthC), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
+    return { timeS: r.timeS, headC: r.headC, truthC };
+  }
+  const crossing = (truthC: (t: number) => number, aboveC: number, fromS: number): number => {
+    let t = fromS;
+    while (truthC(t) <= aboveC) t += 0.5;
+    return t;
+  };
+
+  it('a creeping plateau that ends in a slow climb alarms within 60 s of the head passing its median + 1 degC', () => {
+    // The plateau creeps 0.8 degC in 10 min, then 0.4 in 10 more, and the climb (0.6 degC/min)
+    // is hardly steeper: the wander must be measured about the plateau's course, not its level,
+    // or the creep counts as noise and the threshold (and the delay) grows. The median of the
+    // noise-free stretch is the plateau level as the benchmark's truth defines it.
+    for (const seed of [5, 6, 7]) {
+      const { timeS, headC, truthC } = through([[0, 20], [300, 20], [320, 80], [900, 80.8], [1500, 81.2], [2100, 87.2], [2400, 87.5]], seed);
+      const events = analyzeReadings(timeS, headC);
+      const breakthroughs = events.filter((e) => e.kind === 'breakthrough');
+      expect(breakthroughs.length).toBe(1);
+      const stretch = Array.from({ length: 1500 - 380 + 1 }, (_, i) => truthC(380 + i)).sort((a, b) => a - b);
+      const dueS = crossing(truthC, stretch[stretch.length >> 1]! + 1, 1000);
+      expect(breakthroughs[0]!.timeS).toBeGreaterThan(dueS - 60);
+      expect(breakthroughs[0]!.timeS).toBeLessThan(dueS + 60);
+    }
+  });
+
+  it('a steep climb off a plateau alarms within 5 s of the head passing its level + 1 degC', () => {
+    const { timeS, headC, truthC } = through([[0, 20], [300, 20], [320, 80], [1500, 80.1], [1560, 92], [2400, 92.1]]);
+    const events = analyzeReadings(timeS, headC);
+    const breakthrough = events.find((e) => e.kind === 'breakthrough')!;
+    const dueS = crossing(truthC, events.find((e) => e.kind === 'plateau')!.headC + 1, 1500);
+    expect(breakthrough.timeS).toBeGreaterThan(dueS - 5);
+    expect(breakthrough.timeS).toBeLessThan(dueS + 5);
+  });
+
+  it('a state saved before the plateau course existed resumes and still finds the breakthrough', () => {
+    const { timeS, headC } = through([[0, 20], [300, 20], [320, 80], [1500, 80.1], [1560, 92], [2400, 92.1]]);
+    let w = new RunWatcher();
+    const kindsSeen: string[] = [];
+    for (let i = 0; i < timeS.length; i++) {
+      if (timeS[i - 1]! < 1000 && timeS[i]! >= 1000) {
+        const old = JSON.parse(w.save()) as Record<string, unknown>;
+        expect(old.course).toBeDefined();
+        delete old.course;
+        w = RunWatcher.restore(JSON.stringify(old));
+      }
+      kindsSeen.push(...w.push(timeS[i]!, headC[i]!).map((e) => e.kind));
+    }
+    expect(kindsSeen).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau']);
+  });
+});

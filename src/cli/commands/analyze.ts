@@ -14,7 +14,7 @@ plateau (with its level), breakthrough, stall, sensor-fault, and with a plan, cu
   --plan FILE      cut plan, JSON: {"cuts": [{"receiver": 1, "from_c": 55, "to_c": 58.5}, ...]}
                    ("windows" is accepted for "cuts"); events then name the next receiver
   --json           one JSON object per event and line:
-                   {"file","time_s","event","head_c","alarm","action","reason","receiver"}
+                   {"file","time_s","event","head_c","alarm","message","action","reason","receiver"}
 
 A malformed file is reported with its line number and skipped; the others still run, and
 the exit code is then 1.
@@ -31,7 +31,7 @@ export const analyze: Command = {
     const planPath = parsed.options.get('plan');
     const plan = planPath === undefined ? [] : await readPlanFile(planPath, io);
     const isJson = parsed.options.has('json');
-    if (!isJson) io.out(tableRow(['file', 'time', 'event', 'head_c', 'receiver', 'action']));
+    if (!isJson) io.out(tableRow(['file', 'time', 'event', 'head_c', 'receiver', 'alert']));
     let failures = 0;
     for (const file of parsed.positional) {
       const events = await analyzeFile(file, plan, io);
@@ -68,13 +68,13 @@ async function analyzeFile(file: string, plan: CutWindow[], io: CommandIo): Prom
 function jsonLine(file: string, e: WatchEvent): string {
   return JSON.stringify({
     file, time_s: round(e.timeS, 1), event: e.kind, head_c: Number.isFinite(e.headC) ? round(e.headC, 2) : null,
-    alarm: e.isAlarm, action: e.action, reason: e.reason, receiver: e.receiver,
+    alarm: e.isAlarm, message: e.message, action: e.action, reason: e.reason, receiver: e.receiver,
   });
 }
 
 function tableCells(file: string, e: WatchEvent): string[] {
   const kind = e.reason === undefined ? e.kind : `${e.kind} (${e.reason})`;
-  return [file, clock(e.timeS), kind, Number.isFinite(e.headC) ? e.headC.toFixed(1) : '-', e.receiver === undefined ? '-' : String(e.receiver), e.action];
+  return [file, clock(e.timeS), kind, Number.isFinite(e.headC) ? e.headC.toFixed(1) : '-', e.receiver === undefined ? '-' : String(e.receiver), `${e.message}. ${e.action}`];
 }
 
 const WIDTHS = [18, 9, 28, 7, 9];
