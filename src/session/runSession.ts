@@ -1,6 +1,7 @@
 import type { Alerter, ScreenWakeLock } from '../alerts/index.ts';
 import type { Clock } from '../sensor/clock.ts';
 import { AlarmBook, ReadingBuffer, createRunHeader, currentReceiver, type Alarm, type AlarmBookState, type NewRun, type RunHeader } from '../run/index.ts';
+import { figuresFor, type Figures } from '../science/index.ts';
 import { RunJournal, type KeyValueStore } from '../store/index.ts';
 import { sensorSilentWording, wordEvent } from './alarmWording.ts';
 import type { AlarmThresholds, LiveSource, RunWatcher, SessionReading, WatcherEvent } from './types.ts';
@@ -60,6 +61,8 @@ export class RunSession {
   outOfOrderCount = 0;
   /** Set when this run was reopened after the app stopped. */
   resumedAfterGap = false;
+  /** How alarms and information word temperatures: the chemist's scale, set by the app from Settings. */
+  figures: Figures = figuresFor();
 
   private constructor(deps: SessionDeps, timings: SessionTimings, header: RunHeader, journal: RunJournal, watcher: RunWatcher, alarms: AlarmBook) {
     this.#deps = deps;
@@ -271,7 +274,7 @@ export class RunSession {
       const { time_s, event: kind, head_c, ...detail } = event;
       h.events = [...h.events, { time_s, event: kind, head_c, ...(Object.keys(detail).length > 0 ? { detail } : {}) }];
     });
-    const worded = wordEvent(event, this.receiver + 1);
+    const worded = wordEvent(event, this.receiver + 1, this.figures);
     if (!worded) return;
     if ('info' in worded) {
       this.#deps.alerter?.info(worded.info);

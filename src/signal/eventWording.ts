@@ -1,3 +1,4 @@
+import { figuresFor, type Figures } from '../science/units/figures.ts';
 import type { EventKind, FaultReason, StallReason } from './types.ts';
 
 /**
@@ -21,14 +22,15 @@ export interface EventWording {
 const DEFER = "follow your lab's procedures";
 const DRY_POT = `If the pot is nearly dry, stop heating: never distil to dryness (overheated residues, peroxides, cracked glass); ${DEFER}`;
 
-const degrees = (headC: number): string => (Number.isFinite(headC) ? ` at ${headC.toFixed(1)} degrees` : '');
 
 /**
  * Words for a watcher event: `headC` the event's head temperature (for a plateau its level,
  * NaN for none), `receiver` the one to change to (breakthrough, cut) or collecting (vapour,
- * plateau), when a plan or the app knows it.
+ * plateau), when a plan or the app knows it; temperatures on the reader's scale (`figures`,
+ * degC by default).
  */
-export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallReason | FaultReason, receiver?: number): EventWording {
+export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallReason | FaultReason, receiver?: number, figures: Figures = figuresFor()): EventWording {
+  const degrees = (c: number): string => (Number.isFinite(c) ? ` at ${figures.temperature(c)}` : '');
   const to = receiver === undefined ? 'the next receiver' : `receiver ${receiver}`;
   switch (kind) {
     case 'vapour':

@@ -95,6 +95,10 @@ export function App({ services, updates }: AppProps) {
     setScreen('runs');
   };
   useSessionVersion(session);
+  // Alarms spoken during the run word temperatures on the chemist's current scale.
+  useEffect(() => {
+    if (session) session.figures = figures;
+  }, [session, figures]);
   const syncStateOf = useSyncStates(services.outbox);
 
   // `#demo-interval=0.1` in the address gives the demo 10 readings a second (bench/watch-soak).

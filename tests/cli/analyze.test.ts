@@ -43,7 +43,7 @@ describe('analyze', () => {
     const io = fakeIo({ 'run.csv': goodCsv });
     await analyze.run(['run.csv'], io);
     expect(io.outLines[0]).toMatch(/^file\s+time\s+event\s+head_c/);
-    expect(io.outLines.some((l) => /breakthrough/.test(l) && /Temperature rising off the plateau at [\d.]+ degrees\. Change to the next receiver/.test(l))).toBe(true);
+    expect(io.outLines.some((l) => /breakthrough/.test(l) && /Temperature rising off the plateau at [\d.]+ °C\. Change to the next receiver/.test(l))).toBe(true);
   });
   it('analyze reports a malformed file with its line number, still runs the others and exits 1', async () => {
     const io = fakeIo({ 'bad.csv': 'time_s,head_c\n0,20\nfoo,21\n', 'run.csv': goodCsv });

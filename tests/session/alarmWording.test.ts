@@ -1,3 +1,4 @@
+import { figuresFor } from '../../src/science/index.ts';
 import { describe, expect, it } from 'vitest';
 import { sensorSilentWording, wordEvent } from '../../src/session/index.ts';
 import { analyzeReadings, wordWatchEvent } from '../../src/signal/index.ts';
@@ -5,7 +6,7 @@ import { analyzeReadings, wordWatchEvent } from '../../src/signal/index.ts';
 describe('wordEvent', () => {
   it('makes a breakthrough an alarm that names the next receiver', () => {
     expect(wordEvent({ time_s: 1, event: 'breakthrough', head_c: 78.44 }, 2)).toEqual({
-      alarm: { kind: 'change-receiver', message: 'Temperature rising off the plateau at 78.4 degrees', action: 'Change to receiver 2' },
+      alarm: { kind: 'change-receiver', message: 'Temperature rising off the plateau at 78.4 °C', action: 'Change to receiver 2' },
     });
   });
 
@@ -41,8 +42,15 @@ describe('wordEvent', () => {
     const fault = wordEvent({ time_s: 1, event: 'sensor-fault', head_c: null, reason: 'open-thermocouple' }, 2);
     expect(fault && 'alarm' in fault && fault.alarm.message).toBe('Sensor problem: open thermocouple');
     expect(wordEvent({ time_s: 1, event: 'vapour', head_c: 60 }, 2)).toEqual({ info: 'Vapour has reached the thermometer' });
-    expect(wordEvent({ time_s: 1, event: 'plateau', head_c: 77.06 }, 2)).toEqual({ info: 'Steady at 77.1 degrees' });
+    expect(wordEvent({ time_s: 1, event: 'plateau', head_c: 77.06 }, 2)).toEqual({ info: 'Steady at 77.1 °C' });
     expect(wordEvent({ time_s: 1, event: 'something-new', head_c: 1 }, 2)).toBeNull();
+  });
+
+  it('words temperatures on the chemist\'s scale: 77.06 degC is 170.7 degF (x 1.8 + 32, NIST SP 811, B.8)', () => {
+    const fahrenheit = figuresFor({ temperature: 'degF', pressure: 'kPa', decimalMark: ',' });
+    expect(wordEvent({ time_s: 1, event: 'plateau', head_c: 77.06 }, 2, fahrenheit)).toEqual({ info: 'Steady at 170,7 °F' });
+    const cut = wordEvent({ time_s: 1, event: 'breakthrough', head_c: 78.4 }, 2, fahrenheit);
+    expect(cut && 'alarm' in cut && cut.alarm.message).toBe('Temperature rising off the plateau at 173,1 °F');
   });
 
   it('says what the watcher says: the app and analyze share one wording', () => {

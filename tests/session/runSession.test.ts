@@ -125,7 +125,7 @@ describe('RunSession', () => {
       source.send([s, 77.1]);
       await h.advance(1000);
     }
-    expect(h.infos).toEqual(['Steady at 77.1 degrees']);
+    expect(h.infos).toEqual(['Steady at 77.1 °C']);
     expect(h.alarmsSpoken).toHaveLength(0);
   });
 
