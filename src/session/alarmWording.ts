@@ -14,7 +14,7 @@ const sameKinds: AlarmCategory extends AlarmKind ? (AlarmKind extends AlarmCateg
 void sameKinds;
 
 const EVENT_KINDS: ReadonlySet<string> = new Set<EventKind>(['vapour', 'plateau', 'breakthrough', 'stall', 'sensor-fault', 'cut']);
-const REASONS: ReadonlySet<string> = new Set<StallReason | FaultReason>(['no-vapour', 'falling-away', 'creeping', 'no-valid-readings', 'open-thermocouple', 'erratic']);
+const REASONS: ReadonlySet<string> = new Set<StallReason | FaultReason>(['no-vapour', 'falling-away', 'creeping', 'no-valid-readings', 'open-thermocouple', 'erratic', 'stuck']);
 
 /**
  * Turns a watcher event into an alarm that names its action, or into information, or nothing

@@ -71,6 +71,13 @@ export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallRea
         action: `Check the heat: if it went off, find out why before turning it back on. ${DRY_POT}`,
       };
     case 'sensor-fault':
+      if (reason === 'stuck') {
+        return {
+          category: 'sensor-lost',
+          message: `Sensor problem: reading stuck${degrees(headC)}`,
+          action: 'The value has not wavered at all, as a live sensor does: check the meter and its connection, and read the thermometer by eye meanwhile',
+        };
+      }
       if (reason === 'erratic') {
         return {
           category: 'sensor-lost',

@@ -3,6 +3,7 @@ import { normaliseCutPlan } from './cutPlan.ts';
 import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
 import { onAcceptedReading } from './stateMachine.ts';
 import { spikeFilterPush, spikeFilterReset } from './spikeFilter.ts';
+import { createStuckReadings, pushStuckReading } from './stuckReading.ts';
 import { watcherStateFromJson, watcherStateToJson } from './stateJson.ts';
 import type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchEvent, WatchState } from './types.ts';
 import { resolveWatcherOptions, type WatcherOptions } from './watcherOptions.ts';
@@ -74,13 +75,21 @@ export class RunWatcher {
       this.checkTime(timeS);
       return this.events;
     }
-    if (s.state === 'fault' && !this.recover(timeS)) {
+    if (s.state === 'fault' && !this.recover(timeS, headC)) {
       s.lastValidS = timeS;
       return this.events;
     }
     const gapS = timeS - s.lastValidS;
     s.lastValidS = timeS;
     const isHand = s.intervalS >= s.options.handIntervalS;
+    // Typed readings repeat whenever the thermometer does: only an instrument can be stuck.
+    if (!isHand) {
+      s.stuck ??= createStuckReadings();
+      if (pushStuckReading(s.stuck, timeS, headC, s.state)) {
+        this.enterFault(timeS, 'stuck', headC);
+        return this.events;
+      }
+    }
     if (isHand) {
       this.accept(timeS, headC);
     } else {
@@ -127,17 +136,19 @@ export class RunWatcher {
     }
   }
 
-  private enterFault(timeS: number, reason: FaultReason): void {
+  private enterFault(timeS: number, reason: FaultReason, headC = Number.NaN): void {
     const s = this.s;
     s.preFaultState = s.state;
     s.faultReason = reason;
     s.recoverCount = 0;
     this.setState('fault', timeS);
-    this.emit(timeS, 'sensor-fault', NaN, reason);
+    this.emit(timeS, 'sensor-fault', headC, reason);
   }
 
-  private recover(timeS: number): boolean {
+  private recover(timeS: number, valueC: number): boolean {
     const s = this.s;
+    // A stuck value does not count towards trusting the sensor again; the first change does.
+    if (s.faultReason === 'stuck' && valueC === s.stuck?.valueC) return false;
     s.recoverCount++;
     if (s.recoverCount < RECOVER_READINGS) return false;
     const lastSpikeS = s.spikes.spikeTimesS[s.spikes.spikeTimesS.length - 1] ?? -Infinity;

@@ -5,7 +5,7 @@ export type EventKind = 'vapour' | 'plateau' | 'breakthrough' | 'stall' | 'senso
 export type WatchState = 'cold' | 'rising' | 'plateau' | 'leaving' | 'stalled' | 'fault';
 
 export type StallReason = 'no-vapour' | 'falling-away' | 'creeping';
-export type FaultReason = 'no-valid-readings' | 'open-thermocouple' | 'erratic';
+export type FaultReason = 'no-valid-readings' | 'open-thermocouple' | 'erratic' | 'stuck';
 
 /** Why a reading carries no valid temperature: passed in, or found by the watcher. */
 export type InvalidReason = 'missing' | 'fault-code' | 'out-of-range';

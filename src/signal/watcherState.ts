@@ -1,5 +1,6 @@
 import { createEwRegression, type EwRegression } from './ewRegression.ts';
 import { createSpikeFilter, type SpikeFilter } from './spikeFilter.ts';
+import { createStuckReadings, type StuckReadings } from './stuckReading.ts';
 import type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchState } from './types.ts';
 import type { WatcherOptions } from './watcherOptions.ts';
 
@@ -51,6 +52,8 @@ export interface WatcherState {
   hasRaisedCreep: boolean;
   /** Since when the head has climbed slowly without settling. Units: s. */
   creepSinceS: number;
+  /** The run of identical readings (stuckReading.ts). Absent in states saved before it existed. */
+  stuck?: StuckReadings;
   receiverIndex: number;
   cutSinceS: number;
   lastAlarmS: Partial<Record<EventKind, number>>;
@@ -66,6 +69,6 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): 
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
   };
 }

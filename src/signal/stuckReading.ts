@@ -1,0 +1,100 @@
+/**
+ * A reading stuck where it must move: a live thermocouple always wavers by its noise, so the
+ * very same value, reading after reading, far longer than that noise allows, is a frozen meter
+ * or a board repeating its last value, not a steady head. The test is a run length, set from
+ * the sensor's own noise and resolution: with Gaussian noise of standard deviation sigma about
+ * any level, two readings fall in one quantisation step q at most with probability
+ * p = erf(q / (2 sqrt(2) sigma)) (the step centred on the level), so n identical readings in a
+ * row have probability at most p^(n-1). The run that is a fault is the n with p^(n-1) below
+ * `odds`. Quantised to steps as wide as the noise (whole degrees, a quiet 0.25 degC board),
+ * p nears 1 and the test asks for hours: it cannot mistake such a plateau for a fault.
+ */
+
+/** What the test keeps between readings (plain data: it saves with the watcher). */
+export interface StuckReadings {
+  /** The watcher state the statistics below belong to; they start again when it changes. */
+  state: string;
+  /** The value repeated now. Units: degC. */
+  valueC: number;
+  /** When it first came. Units: s. */
+  sinceS: number;
+  /** Readings of it in a row. */
+  count: number;
+  /** The noise when the run began, from this stretch's readings (the quiet run cannot lower it). Units: degC. */
+  sigmaC: number;
+  /** The smallest step between two readings ever seen: the sensor's resolution. Units: degC. */
+  quantumC: number;
+  /** Times the value has changed in this stretch: the sensor has shown that it wavers here. */
+  changes: number;
+  /** Sum of squared steps between readings in this stretch, and their number. Units: degC^2. */
+  stepSquares: number;
+  steps: number;
+}
+
+/** A run this unlikely from noise is a fault (about one false alarm in 10^9 runs). */
+const ODDS = 1e-9;
+/** The value must have changed this often in the stretch before its stillness means anything. */
+const MIN_CHANGES = 20;
+/** Never fewer identical readings, nor a shorter time, than these. */
+const MIN_READINGS = 10;
+const MIN_SECONDS = 30;
+/** Steps larger than this are changes of course or spikes, not noise. Units: degC. */
+const NOISE_STEP_MAX_C = 1;
+
+export function createStuckReadings(): StuckReadings {
+  return { state: '', valueC: Number.NaN, sinceS: Number.NaN, count: 0, sigmaC: Number.NaN, quantumC: Number.NaN, changes: 0, stepSquares: 0, steps: 0 };
+}
+
+// Abramowitz and Stegun 7.1.26 (error below 1.5e-7), enough for a run-length threshold.
+function erf(x: number): number {
+  const t = 1 / (1 + 0.3275911 * Math.abs(x));
+  const y = 1 - ((((1.061405429 * t - 1.453152027) * t + 1.421413741) * t - 0.284496736) * t + 0.254829592) * t * Math.exp(-x * x);
+  return x >= 0 ? y : -y;
+}
+
+/** Identical readings in a row that noise of `sigmaC` at resolution `quantumC` all but never gives. */
+export function stuckRunLength(sigmaC: number, quantumC: number, odds = ODDS): number {
+  if (!(sigmaC > 0) || !(quantumC > 0)) return Number.POSITIVE_INFINITY;
+  const p = erf(quantumC / (2 * Math.SQRT2 * sigmaC));
+  if (!(p < 1)) return Number.POSITIVE_INFINITY;
+  return Math.max(MIN_READINGS, 1 + Math.ceil(Math.log(odds) / Math.log(p)));
+}
+
+/**
+ * One valid reading, in watcher state `state`. Only a plateau is judged: the noise is measured
+ * on the plateau itself (a climb's steps and its rounding look like noise and would make a quiet
+ * plateau look frozen), and a frozen reading there would hide the breakthrough. Returns true
+ * once the run is a fault. Readings closer than a second are not counted as independent
+ * (boards average, so their noise is correlated over a second or so): the run must also last
+ * a second for each reading the test asks for.
+ */
+export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string): boolean {
+  if (state !== t.state) {
+    t.state = state;
+    t.changes = 0;
+    t.stepSquares = 0;
+    t.steps = 0;
+  }
+  if (valueC !== t.valueC) {
+    if (Number.isFinite(t.valueC)) {
+      const step = Math.abs(valueC - t.valueC);
+      if (!(step >= t.quantumC)) t.quantumC = step;
+      if (step <= NOISE_STEP_MAX_C) {
+        t.changes++;
+        t.stepSquares += step * step;
+        t.steps++;
+      }
+    }
+    t.valueC = valueC;
+    t.sinceS = timeS;
+    t.count = 1;
+    // Successive steps of white noise have variance 2 sigma^2; the identical readings count as steps of 0.
+    t.sigmaC = t.steps > 0 ? Math.sqrt(t.stepSquares / t.steps / 2) : Number.NaN;
+    return false;
+  }
+  t.count++;
+  t.steps++;
+  if (state !== 'plateau' || t.changes < MIN_CHANGES) return false;
+  const needed = stuckRunLength(t.sigmaC, t.quantumC);
+  return t.count >= needed && timeS - t.sinceS >= Math.max(MIN_SECONDS, needed - 1);
+}

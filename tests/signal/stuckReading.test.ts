@@ -1,0 +1,92 @@
+import { describe, expect, it } from 'vitest';
+import { createRandom } from '../../src/science/sensorModel/index.ts';
+import { RunWatcher, type WatchEvent } from '../../src/signal/index.ts';
+import { stuckRunLength } from '../../src/signal/stuckReading.ts';
+
+// Shaped demo traces, not data: 20 degC at the bulb, vapour at 300 s, a plateau at 77 degC.
+function headAt(t: number): number {
+  if (t < 300) return 20;
+  if (t < 400) return 20 + (57 * (t - 300)) / 100;
+  return 77;
+}
+
+/** Readings every `intervalS` with Gaussian noise `sigmaC`, rounded to `stepC`; frozen from `freezeS`. */
+function trace(endS: number, intervalS: number, sigmaC: number, stepC: number, freezeS = Infinity, seed = 7): { t: number[]; c: number[] } {
+  const random = createRandom(seed);
+  const t: number[] = [];
+  const c: number[] = [];
+  let frozen = Number.NaN;
+  for (let time = 0; time <= endS; time += intervalS) {
+    let value = Math.round((headAt(time) + sigmaC * random.normal()) / stepC) * stepC;
+    if (time >= freezeS) {
+      if (Number.isNaN(frozen)) frozen = c[c.length - 1]!;
+      value = frozen;
+    }
+    t.push(time);
+    c.push(value);
+  }
+  return { t, c };
+}
+
+function run(watcher: RunWatcher, t: number[], c: number[], from = 0): WatchEvent[] {
+  const events: WatchEvent[] = [];
+  for (let i = from; i < t.length; i++) events.push(...watcher.push(t[i]!, c[i]!));
+  return events;
+}
+
+const stuckFaults = (events: WatchEvent[]) => events.filter((e) => e.kind === 'sensor-fault' && e.reason === 'stuck');
+
+describe('a reading stuck where it must move', () => {
+  it('stuckRunLength follows the noise and the resolution: short for a noisy fine sensor, hours for a coarse quiet one', () => {
+    // sigma 0.1 degC at 0.01 degC resolution: p = erf(0.01 / (2 sqrt2 x 0.1)) = 0.040, so the floor of 10 readings rules
+    expect(stuckRunLength(0.1, 0.01)).toBe(10);
+    // sigma 0.05 degC at 0.25 degC steps: p = erf(1.77) = 0.988, over 1500 identical readings
+    expect(stuckRunLength(0.05, 0.25)).toBeGreaterThan(1500);
+    // whole degrees with sigma 0.2 degC: p = erf(1.77) again
+    expect(stuckRunLength(0.2, 1)).toBeGreaterThan(1500);
+    expect(stuckRunLength(Number.NaN, 0.01)).toBe(Number.POSITIVE_INFINITY);
+    expect(stuckRunLength(0.1, 0)).toBe(Number.POSITIVE_INFINITY);
+  });
+
+  it('a meter that freezes on the plateau raises one sensor fault within a minute, and trusts the sensor again when it moves', () => {
+    const { t, c } = trace(1500, 1, 0.1, 0.01, 1200);
+    const watcher = new RunWatcher();
+    const events = run(watcher, t, c);
+    const stuck = stuckFaults(events);
+    expect(stuck).toHaveLength(1);
+    expect(stuck[0]!.timeS).toBeGreaterThan(1200);
+    expect(stuck[0]!.timeS).toBeLessThanOrEqual(1260);
+    expect(stuck[0]!.message).toMatch(/reading stuck at 7\d\.\d °C/);
+    expect(watcher.state).toBe('fault');
+    const moving = trace(1600, 1, 0.1, 0.01, Infinity, 9);
+    run(watcher, moving.t, moving.c, 1501);
+    expect(watcher.state).not.toBe('fault');
+  });
+
+  it('a plateau read in whole degrees, or in quiet 0.25 degC steps, is never taken for a stuck sensor', () => {
+    for (const [sigma, step] of [[0.2, 1], [0.05, 0.25]] as const) {
+      const { t, c } = trace(4 * 3600, 1, sigma, step);
+      expect(stuckFaults(run(new RunWatcher(), t, c))).toEqual([]);
+    }
+  });
+
+  it('typed readings that repeat are not a fault', () => {
+    const t: number[] = [];
+    const c: number[] = [];
+    for (let time = 0; time <= 3 * 3600; time += 90) {
+      t.push(time);
+      c.push(time < 600 ? 20 + time / 30 : 77);
+    }
+    expect(stuckFaults(run(new RunWatcher(), t, c))).toEqual([]);
+  });
+
+  it('a watcher saved in the middle of a frozen run and restored raises the fault at the same reading', () => {
+    const { t, c } = trace(1500, 1, 0.1, 0.01, 1200);
+    const whole = stuckFaults(run(new RunWatcher(), t, c));
+    const first = new RunWatcher();
+    const cut = t.indexOf(1210);
+    run(first, t.slice(0, cut), c.slice(0, cut));
+    const resumed = stuckFaults(run(RunWatcher.restore(first.save()), t, c, cut));
+    expect(resumed).toEqual(whole);
+  });
+});
