@@ -7,6 +7,7 @@ import { idbKeyValueStore } from '../store/idbKeyValueStore.ts';
 import { flushForBackgroundSync, outboxSyncTag } from '../sync/backgroundSync.ts';
 import { labOutbox } from '../sync/labOutbox.ts';
 import type { Outbox } from '../sync/outbox.ts';
+import { focusAppWindow } from './focusAppWindow.ts';
 
 declare const self: ServiceWorkerGlobalScope & { __WB_MANIFEST: (string | PrecacheEntry)[] };
 
@@ -42,4 +43,11 @@ self.addEventListener('sync', (event) => {
     nowMs: () => Date.now(),
   });
   sync.waitUntil(flushForBackgroundSync(outbox));
+});
+
+// An alarm shown while the page was hidden (src/alerts/notifications.ts): a tap brings the run
+// back to the front. The alarm itself is acknowledged on the Watch screen, not here.
+self.addEventListener('notificationclick', (event) => {
+  event.notification.close();
+  event.waitUntil(focusAppWindow(self.clients, self.registration.scope));
 });
