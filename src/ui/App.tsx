@@ -397,8 +397,12 @@ export function App({ services, updates }: AppProps) {
               <button type="button" class="action action-quiet" onClick={() => openRun(ended.id, 'fractions')}>Fractions</button>
               <button type="button" class="action action-quiet" onClick={() => openRun(ended.id, 'report')}>Report</button>
             </div>
-            <button type="button" class="action action-start" onClick={() => setStage('checklist')}>
-              Start another demo run
+            <button type="button" class="action action-start" onClick={() => {
+              setSession(null);
+              setEnded(null);
+              setStage('idle');
+            }}>
+              New run
             </button>
           </section>
         )}

@@ -51,5 +51,9 @@ it('goes through vapour, plateau, a breakthrough alarm, receiver 2 and the end, 
   await page.getByRole('dialog').getByRole('button', { name: 'End run' }).click();
   await page.getByRole('heading', { name: 'Run ended' }).waitFor();
   expect(await page.evaluate(() => navigator.onLine)).toBe(false);
+  // A new run starts from the choices again (plan, sensor or demo), not straight into a demo.
+  await page.getByRole('button', { name: 'New run' }).click();
+  await page.getByRole('heading', { name: 'Start a run' }).waitFor();
+  expect(await page.getByRole('button', { name: 'Connect a sensor' }).count()).toBe(1);
   await context.close();
 });
