@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import { toRunPlan, type RunHeader, type RunPlan } from '../run/index.ts';
 import { findCompound, type Compound } from '../science/index.ts';
-import { createDemoStill, demoCutPlan, demoMixture, type DemoStillSnapshot } from '../science/demo/index.ts';
+import { createDemoStill, demoChargeFor, demoCutPlan, demoMixture, type DemoStillOptions, type DemoStillSnapshot } from '../science/demo/index.ts';
 import { SimulatedSource } from '../sensor/simulated/simulatedSource.ts';
 import { RunSession, defaultTimings, type AlarmThresholds, type LiveSource, type SessionTimings } from '../session/index.ts';
 import { defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
@@ -103,7 +103,8 @@ export function App({ services, updates }: AppProps) {
 
   // `#demo-interval=0.1` in the address gives the demo 10 readings a second (bench/watch-soak).
   const demoIntervalS = Number(new URLSearchParams(location.hash.slice(1)).get('demo-interval')) || 1;
-  const makeDemoSource = (speed: number, saved?: DemoStillSnapshot, still: { pressurePa?: number; plates?: number } = {}): LiveSource =>
+  // A reopened run passes no still options: the snapshot carries the charge, pressure and column it played.
+  const makeDemoSource = (speed: number, saved?: DemoStillSnapshot, still: DemoStillOptions = {}): LiveSource =>
     new SimulatedSource({ speed, sampleIntervalS: demoIntervalS, still: createDemoStill(still, saved) });
 
   // Settings, then any run that was going when the app last stopped.
@@ -217,10 +218,20 @@ export function App({ services, updates }: AppProps) {
       // In a worker: the simulator and the UNIFAC tables stay out of the first load and off the page's thread.
       what.plan = await predictOffThread({ plan: what.plan, charge: what.charge, pressurePa: what.pressurePa, plates: what.column?.theoretical_plates ?? 0 });
     }
-    // Where the readings come from: the connected sensor, else the demo still.
-    const source = connected
-      ? sensorLiveSource(connected)
-      : makeDemoSource(settings.demoSpeed, undefined, prepared ? { pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates ?? 4 } : {});
+    // Where the readings come from: the connected sensor, else the demo still, playing the
+    // prepared charge at the lab's pressure through the planned column when there is a plan.
+    let source: LiveSource;
+    try {
+      source = connected
+        ? sensorLiveSource(connected)
+        : makeDemoSource(settings.demoSpeed, undefined, prepared
+          ? { charge: demoChargeFor(prepared.charge), pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates ?? 4 }
+          : {});
+    } catch (error) {
+      setStartError(`This charge cannot be simulated (${error instanceof Error ? error.message : String(error)}). Connect a sensor to run it.`);
+      setStage('idle');
+      return;
+    }
     const sourceInfo = connected
       ? { kind: connected.setup.kind, label: connected.bridge.label }
       : { kind: 'simulated', label: prepared ? 'Simulated still (not your apparatus)' : 'Simulated still' };

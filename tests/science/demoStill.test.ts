@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { createDemoStill } from '../../src/science/demo/index.ts';
+import { createDemoStill, demoChargeFor } from '../../src/science/demo/index.ts';
 import type { DemoStillOptions } from '../../src/science/demo/index.ts';
+import { boilingPoints } from '../fixtures/boilingPoints.ts';
 
 function runFor(seconds: number, options: DemoStillOptions = {}) {
   const still = createDemoStill(options);
@@ -95,5 +96,42 @@ describe('createDemoStill plates', () => {
   it('takes a plate estimate that is not whole (from packing height) by rounding it', () => {
     expect(() => createDemoStill({ plates: 7.5 })).not.toThrow();
     expect(() => createDemoStill({ plates: -2 })).toThrow(RangeError);
+  });
+});
+
+describe('createDemoStill with a prepared charge', () => {
+  // CRC Handbook 95th ed., normal boiling points (tests/fixtures/boilingPoints.ts, from tb_comparison.tsv).
+  const crcC = (name: string) => boilingPoints.find((b) => b.name === name)!.crcK - 273.15;
+  const charge = demoChargeFor([{ name: 'cyclohexane', amount: 30, unit: 'mL' }, { name: 'toluene', amount: 30, unit: 'g' }]);
+
+  it('demoChargeFor turns mL and g into moles by the library\'s densities and molar masses', () => {
+    expect(charge.names).toEqual(['cyclohexane', 'toluene']);
+    // 30 mL x 0.7785 g/mL / 84.16 g/mol = 0.2775 mol cyclohexane; 30 g / 92.14 g/mol = 0.3256 mol toluene
+    // (CRC Handbook densities at 20 degC and molar masses, from memory)
+    expect(charge.chargeMol[0]).toBeCloseTo(0.2775, 2);
+    expect(charge.chargeMol[1]).toBeCloseTo(0.3256, 3);
+  });
+
+  it('demoChargeFor refuses what cannot be simulated, with the reason', () => {
+    expect(() => demoChargeFor([{ name: 'toluene', amount: 50, unit: '%' }])).toThrow(/needs amounts in mL, g or mol/);
+    expect(() => demoChargeFor([{ name: 'unobtainium', amount: 5, unit: 'mL' }])).toThrow(/unobtainium/);
+    expect(() => demoChargeFor([])).toThrow(/empty/);
+  });
+
+  it('plays the prepared charge: plateaus near cyclohexane\'s, then toluene\'s boiling point at 101.325 kPa through 8 plates', () => {
+    const states = runFor(4 * 3600, { charge, pressurePa: 101_325, plates: 8, noiseSdC: 0, quantumC: 0 });
+    const heads = (from: number, to: number) => states.filter((s) => s.phase === 'distilling' && s.distilledMl > from && s.distilledMl < to).map((s) => s.headC);
+    const median = (v: number[]) => [...v].sort((a, b) => a - b)[Math.floor(v.length / 2)]!;
+    // 30 mL of cyclohexane comes over first, then about 35 mL of toluene: the middle of each cut.
+    expect(Math.abs(median(heads(5, 25)) - crcC('cyclohexane'))).toBeLessThan(1);
+    expect(Math.abs(median(heads(45, 60)) - crcC('toluene'))).toBeLessThan(1);
+  });
+
+  it('a snapshot carries the charge and the pressure: a reopened run plays on the same still', () => {
+    const straight = createDemoStill({ charge, pressurePa: 95_000, plates: 3 });
+    for (let t = 0; t < 3000; t++) straight.step(1);
+    const saved = JSON.parse(JSON.stringify(straight.snapshot()));
+    const resumed = createDemoStill({}, saved);
+    for (let t = 0; t < 300; t++) expect(resumed.step(1)).toEqual(straight.step(1));
   });
 });

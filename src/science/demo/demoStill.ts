@@ -1,7 +1,8 @@
 /**
  * The demo still: a playback of one column-simulator run of the demo charge, ethyl acetate
- * recovered from butyl acetate (a solvent-recovery scenario of our own), read through a
- * thermocouple board's model (probe lag, a little noise, 0.25 degC converter steps).
+ * recovered from butyl acetate (a solvent-recovery scenario of our own), or of a charge the
+ * chemist prepared, read through a thermocouple board's model (probe lag, a little noise,
+ * 0.25 degC converter steps).
  *
  * The run is simulated once per set of options (a few hundred ms, then memoised), on a 1 s grid
  * from heat on until well after the pot has run dry; `step(dt)` moves a playback clock along it,
@@ -10,8 +11,8 @@
  *
  * Pure: time comes in as the step length; no clock is read.
  */
-import { findCompound } from '../compounds/index.ts';
-import { molesFromAmounts } from '../vle/index.ts';
+import { findCompound, type Compound } from '../compounds/index.ts';
+import { MissingUnifacDataError, molesFromAmounts, type ThermoModel } from '../vle/index.ts';
 import { APPARATUS_DEFAULTS } from '../column/apparatusDefaults.ts';
 import { columnEquilibrium } from '../column/columnEquilibrium.ts';
 import { componentDataFor } from '../column/componentDataFor.ts';
@@ -20,7 +21,16 @@ import { simulateBatchStill } from '../column/simulateBatchStill.ts';
 import { createRandom } from '../sensorModel/random.ts';
 import { firstOrderLag } from '../sensorModel/firstOrderLag.ts';
 
+/** A charge for the still by library names: plain data, so it saves with the run. */
+export interface DemoCharge {
+  names: string[];
+  /** Units: mol, in the order of `names` */
+  chargeMol: number[];
+}
+
 export interface DemoStillOptions {
+  /** What is in the pot; the demo charge when absent. */
+  charge?: DemoCharge;
   /** Room temperature. Units: degC */
   roomC?: number;
   /** Lab pressure. Units: Pa */
@@ -66,8 +76,11 @@ export const demoMixture = {
   chargeMl: [30, 30],
 };
 
-/** Everything needed to carry a demo run on after the app was closed: the playback position. */
-export type DemoStillSnapshot = DemoStillState;
+/**
+ * Everything needed to carry a demo run on after the app was closed: the playback position and
+ * the options the still was made with (older snapshots have none: the demo charge).
+ */
+export type DemoStillSnapshot = DemoStillState & { options?: DemoStillOptions };
 
 export interface DemoStill {
   readonly state: DemoStillState;
@@ -91,14 +104,25 @@ interface Playback {
 const DURATION_S = 4 * 3600;
 const cache = new Map<string, Playback>();
 
-function simulateDemo(roomC: number, pressurePa: number, plates: number, boilupMlPerMin: number, reflux: number, probeTauS: number): Playback {
-  const key = [roomC, pressurePa, plates, boilupMlPerMin, reflux, probeTauS].join('|');
+/** UNIFAC where it has every pair (real mixtures: alcohols and water), else Raoult's law. */
+function equilibriumFor(compounds: readonly Compound[]): { equilibrium: ReturnType<typeof columnEquilibrium>; model: ThermoModel } {
+  try {
+    return { equilibrium: columnEquilibrium(compounds, 'unifac'), model: 'unifac' };
+  } catch (error) {
+    if (!(error instanceof MissingUnifacDataError)) throw error;
+    return { equilibrium: columnEquilibrium(compounds, 'ideal'), model: 'ideal' };
+  }
+}
+
+function simulateDemo(charge: DemoCharge | undefined, roomC: number, pressurePa: number, plates: number, boilupMlPerMin: number, reflux: number, probeTauS: number): Playback {
+  const key = JSON.stringify([charge ?? null, roomC, pressurePa, plates, boilupMlPerMin, reflux, probeTauS]);
   const cached = cache.get(key);
   if (cached) return cached;
-  const compounds = demoMixture.compounds;
-  const equilibrium = columnEquilibrium(compounds, 'ideal');
+  // The demo's own charge keeps Raoult's law, as it always has; a prepared charge gets UNIFAC where it can.
+  const compounds = charge ? charge.names.map((name) => findCompound(name)) : [...demoMixture.compounds];
+  const equilibrium = charge ? equilibriumFor(compounds).equilibrium : columnEquilibrium(compounds, 'ideal');
   const components = componentDataFor(compounds);
-  const chargeMol = molesFromAmounts(compounds, demoMixture.chargeMl.map((ml) => ml * 1e-6), 'volume');
+  const chargeMol = charge ? [...charge.chargeMol] : molesFromAmounts(compounds, demoMixture.chargeMl.map((ml) => ml * 1e-6), 'volume');
   const total = chargeMol.reduce((a, b) => a + b, 0);
   const roomK = roomC + 273.15;
   const heatW = heatForBoilup({
@@ -111,7 +135,7 @@ function simulateDemo(roomC: number, pressurePa: number, plates: number, boilupM
   });
   const t = run.trace;
   const truthC = t.headK.map((k) => k - 273.15);
-  const potMol = t.potMol[0]!.map((n, i) => n + t.potMol[1]![i]!);
+  const potMol = t.potMol[0]!.map((_, i) => t.potMol.reduce((sum, series) => sum + series[i]!, 0));
   const playback: Playback = {
     headC: firstOrderLag(t.timeS, truthC, probeTauS),
     potC: t.potK.map((k) => k - 273.15),
@@ -134,7 +158,17 @@ function at(series: Float64Array, tS: number): number {
   return series[i]! + (tS - i) * (series[i + 1]! - series[i]!);
 }
 
-export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStillSnapshot): DemoStill {
+/**
+ * A demo still. Resuming from a snapshot, the still is made with the snapshot's options when none
+ * are given, so a reopened run plays on the same charge at the same pressure.
+ */
+export function createDemoStill(given: DemoStillOptions = {}, from?: DemoStillSnapshot): DemoStill {
+  const options = Object.keys(given).length === 0 && from?.options ? from.options : given;
+  const charge = options.charge;
+  if (charge) {
+    if (charge.names.length < 1 || charge.names.length !== charge.chargeMol.length) throw new RangeError('the charge needs one amount per compound');
+    if (!charge.chargeMol.every((n) => n > 0)) throw new RangeError('every amount in the charge must be > 0 mol');
+  }
   const roomC = options.roomC ?? 21;
   const pressurePa = options.pressurePa ?? 101_325;
   if (!(pressurePa > 0)) throw new RangeError('pressure must be > 0 Pa');
@@ -147,7 +181,7 @@ export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStill
   const noiseSdC = options.noiseSdC ?? 0.05;
   const quantumC = options.quantumC ?? 0.25;
   const seed = options.seed ?? 1;
-  const playback = simulateDemo(roomC, pressurePa, plates, boilup, reflux, options.probeTauS ?? 1);
+  const playback = simulateDemo(charge, roomC, pressurePa, plates, boilup, reflux, options.probeTauS ?? 1);
   let timeS = from && from.timeS >= 0 ? from.timeS : 0;
 
   const phaseAt = (tS: number): DemoPhase =>
@@ -174,7 +208,7 @@ export function createDemoStill(options: DemoStillOptions = {}, from?: DemoStill
     get state() {
       return current();
     },
-    snapshot: current,
+    snapshot: () => ({ ...current(), options }),
     step(dtS: number) {
       if (!(dtS >= 0)) throw new RangeError('time step must be >= 0 s');
       timeS += dtS;
