@@ -70,20 +70,22 @@ export function ReportScreen({ run, files, figures, onOpenFractions, onBack, bac
 
       <h3>Fractions</h3>
       <div class="table-scroll">
-        <table class="fraction-table" data-testid="fraction-table">
+        <table class="fraction-table fraction-cards" data-testid="fraction-table">
           <thead><tr><th>Receiver</th><th>Head range</th><th>Times</th><th>Amount</th><th>Composition (mass)</th><th>Purity</th></tr></thead>
           <tbody>
             {report.rows.map((r) => (
               <tr key={r.receiver}>
-                <td>{r.receiver}</td>
-                <td>{c1(r.minHeadC)}–{c1(r.maxHeadC)}</td>
-                <td>{clockTime(r.fromS)}–{clockTime(r.toS)}</td>
-                <td>{ml(r.volumeM3)}<br />{g(r.massKg)}</td>
-                <td>
-                  {r.measured ? names.map((n, i) => `${n} ${pct(r.measured!.mass[i])}`).join(', ') : 'no analysis'}
-                  {r.estimated && <><br /><small>head temp.: {names.map((n, i) => `${n} ${pct(r.estimated!.mass[i])}`).join(', ')}</small></>}
+                <td data-label="Receiver"><div>{r.receiver}</div></td>
+                <td data-label="Head range"><div>{c1(r.minHeadC)}–{c1(r.maxHeadC)}</div></td>
+                <td data-label="Times"><div>{clockTime(r.fromS)}–{clockTime(r.toS)}</div></td>
+                <td data-label="Amount"><div>{ml(r.volumeM3)}<br />{g(r.massKg)}</div></td>
+                <td data-label="Composition (mass)">
+                  <div>
+                    {r.measured ? names.map((n, i) => `${n} ${pct(r.measured!.mass[i])}`).join(', ') : 'no analysis'}
+                    {r.estimated && <><br /><small>head temp.: {names.map((n, i) => `${n} ${pct(r.estimated!.mass[i])}`).join(', ')}</small></>}
+                  </div>
                 </td>
-                <td>{r.mainComponent ? `${pct(r.purityMass)} ${r.mainComponent}` : '—'}{r.purityBasis === 'head temperature' && <small> (est.)</small>}</td>
+                <td data-label="Purity"><div>{r.mainComponent ? `${pct(r.purityMass)} ${r.mainComponent}` : '—'}{r.purityBasis === 'head temperature' && <small> (est.)</small>}</div></td>
               </tr>
             ))}
           </tbody>
