@@ -1,7 +1,7 @@
 import type { Alerter, ScreenWakeLock } from '../alerts/index.ts';
 import type { Clock } from '../sensor/clock.ts';
 import { AlarmBook, ReadingBuffer, createRunHeader, currentReceiver, type Alarm, type AlarmBookState, type NewRun, type RunHeader } from '../run/index.ts';
-import { figuresFor, type Figures } from '../science/index.ts';
+import { figuresFor, type Figures } from '../science/units/index.ts';
 import { RunJournal, type KeyValueStore } from '../store/index.ts';
 import { sensorSilentWording, wordEvent } from './alarmWording.ts';
 import type { AlarmThresholds, LiveSource, RunWatcher, SessionReading, WatcherEvent } from './types.ts';

@@ -73,6 +73,14 @@ export class RunJournal {
     return journal;
   }
 
+  /** The kind of source of the run that was going when the app last stopped, or null: read before reopening it. */
+  static async activeSourceKind(store: KeyValueStore): Promise<string | null> {
+    const runId = await store.get<string>(activeRunKey);
+    if (!runId) return null;
+    const manifest = await store.get<JournalManifest>(manifestKey(runId));
+    return manifest?.header.source.kind ?? null;
+  }
+
   /** Reopens the active run, if one was going when the app last stopped. */
   static async restoreActive(store: KeyValueStore, chunkSize = 512): Promise<RestoredRun | null> {
     const runId = await store.get<string>(activeRunKey);

@@ -1,17 +1,16 @@
 import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
-import { toRunPlan, type RunHeader, type RunPlan } from '../run/index.ts';
-import { findCompound, type Compound } from '../science/index.ts';
-import { createDemoStill, demoChargeFor, demoCutPlan, demoMixture, type DemoStillOptions, type DemoStillSnapshot } from '../science/demo/index.ts';
-import { SimulatedSource } from '../sensor/simulated/simulatedSource.ts';
+import type { RunHeader, RunPlan } from '../run/index.ts';
+import { demoMixtureWords as demoMixture } from '../science/demo/demoMixtureWords.ts';
+import type { DemoStillSnapshot } from '../science/demo/index.ts';
 import { RunSession, defaultTimings, type AlarmThresholds, type LiveSource, type SessionTimings } from '../session/index.ts';
-import { defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
+import { RunJournal, defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
 import { queueEndedRuns, readSyncLink, startSyncTriggers } from '../sync/index.ts';
 import { AlarmBanner } from './alarm/AlarmBanner.tsx';
 import { LabTab } from './lab/LabTab.tsx';
 import { PreHeatChecklist } from './prepare/PreHeatChecklist.tsx';
 // Prepare (issue 8): loaded on first visit; a prepared run starts through the checklist.
 import { LazyPrepareScreen } from './prepare/LazyPrepareScreen.tsx';
-import { extraChecksFor, type PreparedRun } from './prepare/preparedRun.ts';
+import type { PreparedRun } from './prepare/preparedRun.ts';
 import type { AppServices } from './services.ts';
 import type { SensorSetup } from '../sensor/sensorSetup.ts';
 import type { ConnectedSensor } from './sensor/connectedSensor.ts';
@@ -38,17 +37,6 @@ type Stage = 'loading' | 'idle' | 'connect' | 'checklist' | 'running' | 'ended';
 interface AppProps {
   services: AppServices;
   updates?: UpdateService;
-}
-
-/** The library's compounds for the names in a charge; names it does not know are skipped. */
-function knownCompounds(names: string[]): Compound[] {
-  return names.flatMap((name) => {
-    try {
-      return [findCompound(name)];
-    } catch {
-      return [];
-    }
-  });
 }
 
 /** The chemist's alarm repeat, snooze and sensor-silence settings as the live run's timings. */
@@ -103,9 +91,8 @@ export function App({ services, updates }: AppProps) {
 
   // `#demo-interval=0.1` in the address gives the demo 10 readings a second (bench/watch-soak).
   const demoIntervalS = Number(new URLSearchParams(location.hash.slice(1)).get('demo-interval')) || 1;
-  // A reopened run passes no still options: the snapshot carries the charge, pressure and column it played.
-  const makeDemoSource = (speed: number, saved?: DemoStillSnapshot, still: DemoStillOptions = {}): LiveSource =>
-    new SimulatedSource({ speed, sampleIntervalS: demoIntervalS, still: createDemoStill(still, saved) });
+  // The simulated still and the demo's plan load with the first run (src/ui/watch/demoRun.ts).
+  const loadDemo = () => import('./watch/demoRun.ts');
 
   // Settings, then any run that was going when the app last stopped.
   useEffect(() => {
@@ -124,9 +111,12 @@ export function App({ services, updates }: AppProps) {
       setSettings(loaded);
       try {
         let savedSource: unknown;
+        // Only a simulated run needs the still loaded before it reopens.
+        const demo = (await RunJournal.activeSourceKind(services.store)) === 'simulated' ? await loadDemo() : null;
+        // A reopened simulated run passes no still options: the snapshot carries the charge, pressure and column it played.
         const restored = await RunSession.restore(services.sessionDeps, (header, saved) => {
           savedSource = saved;
-          return header.source.kind === 'simulated' ? makeDemoSource(loaded.demoSpeed, saved as DemoStillSnapshot | undefined) : null;
+          return header.source.kind === 'simulated' && demo ? demo.makeDemoSource(loaded.demoSpeed, demoIntervalS, saved as DemoStillSnapshot | undefined) : null;
         }, timingsFor(loaded));
         if (isCancelled) return;
         if (restored) {
@@ -192,7 +182,8 @@ export function App({ services, updates }: AppProps) {
   const changeSettings = (next: Settings) => {
     setSettings(next);
     applySettings(services, next);
-    if (session?.source instanceof SimulatedSource) session.source.speed = next.demoSpeed;
+    const source = session?.source as (LiveSource & { speed?: number }) | null | undefined;
+    if (source?.kind === 'simulated' && typeof source.speed === 'number') source.speed = next.demoSpeed;
     void saveSettings(services.store, next);
   };
 
@@ -202,6 +193,7 @@ export function App({ services, updates }: AppProps) {
     await services.alerter.unlock();
     void services.notifier.ask().catch(() => undefined);
     void services.checkStorage(true).then((health) => setStorageWarning(health.warning));
+    const demo = connected ? null : await loadDemo();
     // What is in the pot: the prepared plan, or with neither plan nor sensor the demo charge.
     const what = prepared
       ? { title: prepared.title, charge: prepared.charge, pressurePa: prepared.pressurePa, column: prepared.column, plan: prepared.plan }
@@ -212,7 +204,7 @@ export function App({ services, updates }: AppProps) {
             charge: demoMixture.components.map((name, i) => ({ name, amount: demoMixture.chargeMl[i]!, unit: 'mL' as const })),
             pressurePa: 101_325,
             column: { description: 'demo column', theoretical_plates: 4 },
-            plan: toRunPlan(demoCutPlan(101_325, 4), 101_325, 4),
+            plan: demo!.demoRunPlan(),
           };
     if (what.plan && what.charge && what.pressurePa) {
       // In a worker: the simulator and the UNIFAC tables stay out of the first load and off the page's thread.
@@ -224,9 +216,9 @@ export function App({ services, updates }: AppProps) {
     try {
       source = connected
         ? sensorLiveSource(connected)
-        : makeDemoSource(settings.demoSpeed, undefined, prepared
-          ? { charge: demoChargeFor(prepared.charge), pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates ?? 4 }
-          : {});
+        : prepared
+          ? demo!.makePreparedDemoSource(settings.demoSpeed, demoIntervalS, { charge: prepared.charge, pressurePa: prepared.pressurePa, plates: prepared.column.theoretical_plates ?? 4 })
+          : demo!.makeDemoSource(settings.demoSpeed, demoIntervalS);
     } catch (error) {
       setStartError(`This charge cannot be simulated (${error instanceof Error ? error.message : String(error)}). Connect a sensor to run it.`);
       setStage('idle');
@@ -295,7 +287,8 @@ export function App({ services, updates }: AppProps) {
             onOpenChange={setRunView}
             syncStateOf={syncStateOf}
             onAmended={(runId) => void services.outbox.queueRun(runId).catch(() => undefined)}
-            onDuplicatePlan={(draft) => {
+            onDuplicatePlan={async (draft) => {
+              const { checksForCharge } = await loadDemo();
               setPrepared({
                 title: draft.title,
                 plan: draft.plan as RunPlan,
@@ -303,7 +296,7 @@ export function App({ services, updates }: AppProps) {
                 pressurePa: draft.pressurePa ?? 101_325,
                 column: { description: draft.column?.description ?? 'as before', theoretical_plates: draft.column?.theoretical_plates ?? 0 },
                 heat: '',
-                extraChecks: extraChecksFor(knownCompounds(draft.charge.map((c) => c.name)), null, (tC) => figures.temperature(tC, 0)),
+                extraChecks: checksForCharge(draft.charge.map((c) => c.name), (tC) => figures.temperature(tC, 0)),
               });
               setScreen('watch');
               setStage('idle');

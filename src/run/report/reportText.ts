@@ -1,4 +1,4 @@
-import { figuresFor, type Figures } from '../../science/index.ts';
+import { figuresFor, type Figures } from '../../science/units/index.ts';
 import type { RunRecord } from '../runRecord.ts';
 import type { RunReport } from './buildRunReport.ts';
 import { plateMethod, type PlateEstimate } from './runPlates.ts';

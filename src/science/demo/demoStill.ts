@@ -20,6 +20,7 @@ import { heatForBoilup } from '../column/heatForBoilup.ts';
 import { simulateBatchStill } from '../column/simulateBatchStill.ts';
 import { createRandom } from '../sensorModel/random.ts';
 import { firstOrderLag } from '../sensorModel/firstOrderLag.ts';
+import { demoMixtureWords } from './demoMixtureWords.ts';
 
 /** A charge for the still by library names: plain data, so it saves with the run. */
 export interface DemoCharge {
@@ -69,11 +70,8 @@ export interface DemoStillState {
 }
 
 export const demoMixture = {
-  title: 'ethyl acetate from butyl acetate',
-  components: ['ethyl acetate', 'n-butyl acetate'],
-  compounds: [findCompound('ethyl acetate'), findCompound('n-butyl acetate')] as const,
-  /** Charge: 30 mL of each. */
-  chargeMl: [30, 30],
+  ...demoMixtureWords,
+  compounds: demoMixtureWords.components.map((name) => findCompound(name)),
 };
 
 /**

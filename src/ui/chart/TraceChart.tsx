@@ -2,7 +2,7 @@ import { useEffect, useRef } from 'preact/hooks';
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 import { downsampleMinMax, type ReadingBuffer } from '../../run/index.ts';
-import { temperatureScaleLabel, toTemperatureScale, type TemperatureScale } from '../../science/index.ts';
+import { temperatureScaleLabel, toTemperatureScale, type TemperatureScale } from '../../science/units/index.ts';
 import { nanGaps } from './nanGaps.ts';
 
 export interface TemperatureBand {

@@ -1,7 +1,7 @@
 import { useEffect, useRef } from 'preact/hooks';
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
-import { temperatureScaleLabel, toTemperatureScale, type TemperatureScale } from '../../science/index.ts';
+import { temperatureScaleLabel, toTemperatureScale, type TemperatureScale } from '../../science/units/index.ts';
 
 /** Head temperature against cumulative distilled volume (a distillation curve), drawn once. */
 export function VolumeChart({ volumeMl, headC, height = 200, scale = 'degC' }: { volumeMl: Float64Array; headC: Float64Array; height?: number; scale?: TemperatureScale }) {

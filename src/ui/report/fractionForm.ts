@@ -1,5 +1,5 @@
 import type { FractionAmount, FractionEntry, MixingRule, RunFractions } from '../../run/index.ts';
-import { fromTemperatureScale, temperatureScaleLabel, toTemperatureScale, type FigureStyle } from '../../science/index.ts';
+import { fromTemperatureScale, temperatureScaleLabel, toTemperatureScale, type FigureStyle } from '../../science/units/index.ts';
 import { parseDecimal as parseWithMark, type DecimalSeparator } from '../units/index.ts';
 
 /** A typed field with the chemist's decimal mark: empty is null, anything not a number NaN. */

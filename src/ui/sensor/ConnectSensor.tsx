@@ -12,7 +12,7 @@ import { LinePreview } from './LinePreview.tsx';
 import { ReadingPreview } from './ReadingPreview.tsx';
 import { BaudField, LineEndingField, ModbusForm, PollingForm, TypedForm, encodings, type ModbusFields, type PollingFields, type TypedFields } from './SetupForms.tsx';
 import { sourceChoices, type SourceChoice } from './sourceChoices.ts';
-import { figuresFor, type Figures } from '../../science/index.ts';
+import { figuresFor, type Figures } from '../../science/units/index.ts';
 import { parseDecimal, type DecimalSeparator } from '../units/index.ts';
 import './connect.css';
 

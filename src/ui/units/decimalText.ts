@@ -1,4 +1,4 @@
-import { formatWithMark } from '../../science/index.ts';
+import { formatWithMark } from '../../science/units/index.ts';
 import type { DecimalSeparatorSetting } from '../../store/index.ts';
 
 /** The mark between the whole and the fractional part of a typed number. */

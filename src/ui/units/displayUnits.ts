@@ -6,7 +6,7 @@ import {
   toTemperatureScale,
   toTemperatureScaleDifference,
   type Figures,
-} from '../../science/index.ts';
+} from '../../science/units/index.ts';
 import type { PressureUnitSetting, Settings, TemperatureUnitSetting } from '../../store/index.ts';
 import { formatDecimal, resolveDecimalSeparator, type DecimalSeparator } from './decimalText.ts';
 

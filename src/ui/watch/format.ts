@@ -1,4 +1,4 @@
-import { toTemperatureScaleDifference, type Figures } from '../../science/index.ts';
+import { toTemperatureScaleDifference, type Figures } from '../../science/units/index.ts';
 
 /** Elapsed time as h:mm:ss (or m:ss under an hour). */
 export function formatElapsed(seconds: number): string {
