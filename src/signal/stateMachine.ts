@@ -53,6 +53,15 @@ const CUT_MARGIN_C = 0.3;
  * own rise raises no second alarm. Chosen on the simulated corpus; lab solvents worth
  * separating boil further apart than this. Units: degC. */
 const SHOULDER_C = 3;
+/** Further up, to this far above the level the last breakthrough left, a plateau that breaks
+ * again within PAUSE_S of being reached is a pause of the same climb too: a component coming
+ * over holds the head for its whole cut, a few-plate column's climb only stops for a minute or
+ * two (in the simulated corpus, all five alarms off such plateaus, 5-7 degC up and 1.5-3.5 min
+ * long, were false). A plateau that lasts longer alarms as the next component's. Chosen on the
+ * simulated corpus (8 degC / 300 s takes one alarm more, still all false; kept narrower so a
+ * close-boiling component's short cut still alarms). Units: degC, s. */
+const PAUSE_C = 6;
+const PAUSE_S = 300;
 const CUT_HOLD_S = 5;
 
 /** One reading that passed the spike filter; the filters have already taken it. */
@@ -130,7 +139,9 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
 
 function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: EventSink): void {
   // Restored states saved before brokeFromC existed carry undefined: no shoulder then.
-  s.isShoulder = s.state === 'leaving' && levelC < (s.brokeFromC ?? NaN) + SHOULDER_C;
+  // Only a plateau reached straight from a breakthrough's climb can be a pause in that climb.
+  if (s.state !== 'leaving') s.brokeFromC = NaN;
+  s.isShoulder = levelC < (s.brokeFromC ?? NaN) + SHOULDER_C;
   // Shoulders chain: a climb that pauses every 2-3 degC is still one climb.
   if (s.isShoulder) s.brokeFromC = levelC;
   s.levelC = levelC;
@@ -193,7 +204,9 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
     s.peakC = fastC;
     s.plateauCandidateS = NaN;
     s.fallSinceS = NaN;
-    if (s.isShoulder) {
+    const isPause = s.levelC < (s.brokeFromC ?? NaN) + PAUSE_C && timeS - s.stateSinceS < PAUSE_S;
+    if (isPause) s.brokeFromC = s.levelC;
+    if (s.isShoulder || isPause) {
       // Still the climb the last alarm announced: carry on rising without a second alarm.
       sink.setState('leaving', timeS);
       return;

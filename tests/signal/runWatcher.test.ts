@@ -199,6 +199,21 @@ describe('RunWatcher on shapes the column simulator makes', () => {
     expect(events[2]!.timeS).toBeLessThan(1560);
   });
 
+  it('a 3-minute pause 5 degC above the last cut is part of the climb: no second breakthrough', () => {
+    const { timeS, headC } = profile([[0, 20], [300, 20], [310, 80], [1500, 80.2], [1560, 85], [1740, 85.1], [1860, 100], [2800, 100]]);
+    const events = analyzeReadings(timeS, headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau', 'plateau']);
+    expect(events[3]!.headC).toBeCloseTo(85, 0);
+  });
+
+  it('a 14-minute plateau 5 degC above the last cut is a component of its own: its rise alarms again', () => {
+    const { timeS, headC } = profile([[0, 20], [300, 20], [310, 80], [1500, 80.2], [1560, 85], [2400, 85.1], [2500, 100], [3200, 100]]);
+    const events = analyzeReadings(timeS, headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau', 'breakthrough', 'plateau']);
+    expect(events[4]!.timeS).toBeGreaterThan(2400);
+    expect(events[4]!.timeS).toBeLessThan(2460);
+  });
+
   it('a plateau 10 degC above the last one is the next component: its own rise alarms again', () => {
     const { timeS, headC } = profile([[0, 20], [300, 20], [310, 80], [1500, 80.2], [1600, 92], [2800, 92.2], [2900, 104], [3600, 104]]);
     const events = analyzeReadings(timeS, headC);
