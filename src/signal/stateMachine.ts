@@ -29,6 +29,8 @@ const CLIMB_FACTOR = 2;
 const CLIMB_SLOPE_SDS = 6;
 /** The smoothed head's variance about the level is averaged over this time. Units: s. */
 const RESIDUAL_POWER_TAU_S = 600;
+/** Squares beyond this many times the running power are clipped to it (a robust power). */
+const ROBUST_CLIP = 9;
 /** Offsets beyond this are sag or breakthrough, not wander. Units: degC. */
 const WANDER_BAND_C = 0.6;
 /** Correlation time taken for the wander (hood draughts, tens of seconds). No published
@@ -185,10 +187,13 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
   const offsetC = fastC - plateauCourseC(s.course, timeS, s.levelC, o.flatSlopeCPerS);
   if (Math.abs(offsetC) < WANDER_BAND_C) {
     ewRegressionAdd(s.course, timeS, valueC);
-    const power = offsetC * offsetC;
+    // Each square counted at most ROBUST_CLIP times the power so far (winsorised): the edges of
+    // a pre-cut sag pass through the band with a steep slope, and must not raise the noise the
+    // breakthrough is then measured against.
+    const power = Number.isNaN(s.residualPowerC2) ? offsetC * offsetC : Math.min(offsetC * offsetC, ROBUST_CLIP * s.residualPowerC2);
     s.residualPowerC2 = Number.isNaN(s.residualPowerC2) ? power : s.residualPowerC2 - Math.expm1(-dtS / RESIDUAL_POWER_TAU_S) * (power - s.residualPowerC2);
-    const slope2 = ewRegressionSlope(s.fast) ** 2;
     const slopePower = s.fastSlopePowerC2PerS2 ?? NaN;
+    const slope2 = Number.isNaN(slopePower) ? ewRegressionSlope(s.fast) ** 2 : Math.min(ewRegressionSlope(s.fast) ** 2, ROBUST_CLIP * slopePower);
     s.fastSlopePowerC2PerS2 = Number.isNaN(slopePower) ? slope2 : slopePower - Math.expm1(-dtS / RESIDUAL_POWER_TAU_S) * (slope2 - slopePower);
   }
   const whiteC2S = (Number.isNaN(s.innovationVarC2) ? 0 : s.innovationVarC2) * s.intervalS;
