@@ -122,6 +122,13 @@ export function parseRunRecordJson(text: string): RunRecord {
   checkTimed(needArray(doc, 'notes'), 'notes');
   checkTimed(needArray(doc, 'gaps'), 'gaps', 'from_s');
   checkFractions(doc.fractions);
+  if (doc.alarm_settings !== undefined) {
+    const a = doc.alarm_settings;
+    if (!isObject(a)) fail('"alarm_settings" must be an object');
+    for (const key of ['breakthrough_rise_c', 'fall_away_c', 'no_vapour_s', 'sensor_silence_s']) {
+      if (!(isFiniteNumber(a[key]) && a[key] > 0)) fail(`alarm_settings.${key} must be a number > 0`);
+    }
+  }
   const run = doc as unknown as RunRecord;
   if (run.status === 'ended' && run.ended_at !== null) return run;
   const lastS = times.length > 0 ? (times[times.length - 1] as number) : 0;

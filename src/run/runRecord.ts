@@ -83,6 +83,20 @@ export interface RunRecord {
    * enters something (records written before this field existed read the same way).
    */
   fractions?: RunFractions;
+  /** The alarm thresholds the run was watched with (Settings at heat on); absent in older records. */
+  alarm_settings?: AlarmSettingsRecord;
+}
+
+/** The thresholds that raised the run's alarms, for the write-up. */
+export interface AlarmSettingsRecord {
+  /** Rise above a plateau that called the cut. Units: degC */
+  breakthrough_rise_c: number;
+  /** Fall below a plateau that was a stall. Units: degC */
+  fall_away_c: number;
+  /** Heating with no vapour before a stall. Units: s */
+  no_vapour_s: number;
+  /** A connected sensor's silence before the sensor alarm. Units: s */
+  sensor_silence_s: number;
 }
 
 /** A run record without its readings: what the journal keeps in its small manifest. */
@@ -98,6 +112,7 @@ export interface NewRun {
   pressurePa?: number | null;
   column?: RunRecord['column'];
   plan?: unknown;
+  alarmSettings?: AlarmSettingsRecord;
 }
 
 export function createRunHeader(run: NewRun): RunHeader {
@@ -125,6 +140,7 @@ export function createRunHeader(run: NewRun): RunHeader {
     heat_changes: [],
     notes: [],
     gaps: [],
+    ...(run.alarmSettings ? { alarm_settings: { ...run.alarmSettings } } : {}),
   };
 }
 

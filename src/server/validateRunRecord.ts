@@ -130,6 +130,12 @@ export function validateRunRecord(body: unknown): RunSummaryFields {
       text(n.text, `${at}.text`);
     });
   }
+  if (r.alarm_settings !== undefined) {
+    const a = object(r.alarm_settings, 'alarm_settings');
+    for (const key of ['breakthrough_rise_c', 'fall_away_c', 'no_vapour_s', 'sensor_silence_s'] as const) {
+      if (!(finite(a[key], `alarm_settings.${key}`) > 0)) throw new RecordError(`alarm_settings.${key}`, 'must be > 0');
+    }
+  }
   each(r.gaps, 'gaps', (g, at) => {
     finite(g.from_s, `${at}.from_s`);
     finite(g.to_s, `${at}.to_s`);

@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
-import type { RunHeader, RunPlan } from '../run/index.ts';
+import type { AlarmSettingsRecord, RunHeader, RunPlan } from '../run/index.ts';
 import { demoMixtureWords as demoMixture } from '../science/demo/demoMixtureWords.ts';
 import type { DemoStillSnapshot } from '../science/demo/index.ts';
 import { RunSession, defaultTimings, type AlarmThresholds, type LiveSource, type SessionTimings } from '../session/index.ts';
@@ -46,6 +46,16 @@ function timingsFor(settings: Settings): SessionTimings {
     alarmRepeatMs: settings.alarmRepeatS * 1000,
     snoozeMs: settings.snoozeMin * 60_000,
     sensorSilenceMs: settings.sensorSilenceS * 1000,
+  };
+}
+
+/** The thresholds as the run record keeps them, for the write-up. */
+function alarmSettingsFor(settings: Settings): AlarmSettingsRecord {
+  return {
+    breakthrough_rise_c: settings.breakthroughRiseC,
+    fall_away_c: settings.fallAwayC,
+    no_vapour_s: settings.noVapourMin * 60,
+    sensor_silence_s: settings.sensorSilenceS,
   };
 }
 
@@ -230,7 +240,13 @@ export function App({ services, updates }: AppProps) {
     try {
       const started = await RunSession.start(
         services.sessionDeps,
-        { id: `run-${Date.now().toString(36)}`, device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser', source: sourceInfo, ...what },
+        {
+          id: `run-${Date.now().toString(36)}`,
+          device: navigator.userAgent.includes('Android') ? 'Android phone' : 'browser',
+          source: sourceInfo,
+          ...what,
+          alarmSettings: alarmSettingsFor(settings),
+        },
         source,
         timingsFor(settings),
         thresholdsFor(settings),

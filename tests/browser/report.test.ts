@@ -130,6 +130,8 @@ describe('From Prepare through a simulated run to the report', () => {
     expect(tableText).toContain('24,0 mL');
     expect(tableText).toMatch(/\d+,\d °F–\d+,\d °F/);
     expect(await page.locator('.report-facts').textContent()).toMatch(/101,3 kPa/);
+    // The thresholds the run was watched with, on the chosen scale: 1 degC is 1.8 degF.
+    expect(await page.locator('.report-facts').textContent()).toMatch(/cut at 1,8 °F above a plateau/);
     expect(await page.getByTestId('mass-balance').textContent()).toMatch(/unaccounted/);
     expect(await page.locator('.report .trace-chart canvas').count()).toBeGreaterThanOrEqual(2);
     // Everything inside the phone's width: no sideways scrolling (Pixel 7 emulation, 412 px).

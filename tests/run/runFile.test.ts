@@ -5,6 +5,7 @@ function sampleRun(): RunRecord {
   const header = createRunHeader({
     id: 'run-abc', title: 'Recovery of ethyl acetate', startedAt: '2026-12-01T09:00:00.000Z', device: 'phone',
     source: { kind: 'manual', label: 'typed' }, charge: [{ name: 'ethyl acetate', amount: 30, unit: 'mL' }], pressurePa: 100_800,
+    alarmSettings: { breakthrough_rise_c: 1.5, fall_away_c: 4, no_vapour_s: 1800, sensor_silence_s: 10 },
   });
   header.status = 'ended';
   header.ended_at = '2026-12-01T10:00:00.000Z';
@@ -35,6 +36,13 @@ describe('runRecordToJson and parseRunRecordJson', () => {
     expect(runRecordToJson(back)).toBe(text);
   });
 
+  it('the alarm thresholds a run was watched with go with it, and a record without them still reads', () => {
+    const run = sampleRun();
+    expect(parseRunRecordJson(runRecordToJson(run)).alarm_settings).toEqual({ breakthrough_rise_c: 1.5, fall_away_c: 4, no_vapour_s: 1800, sensor_silence_s: 10 });
+    const { alarm_settings: _dropped, ...older } = run;
+    expect(parseRunRecordJson(JSON.stringify(older)).alarm_settings).toBeUndefined();
+  });
+
   it('parseRunRecordJson takes a run exported while still going as ended at its last reading', () => {
     const run = { ...sampleRun(), status: 'running', ended_at: null };
     const back = parseRunRecordJson(JSON.stringify(run));
@@ -63,6 +71,8 @@ describe('runRecordToJson and parseRunRecordJson', () => {
     [mutate((d) => { d.charge = [{ name: 'x', amount: 1, unit: 'L' }]; }), /charge component 1/],
     [mutate((d) => { (d.fractions as { entries: { amount: unknown }[] }).entries[0]!.amount = { value: -1, unit: 'mL' }; }), /fraction entry 1: the amount/],
     [mutate((d) => { (d.fractions as { entries: { analysis: unknown }[] }).entries[0]!.analysis = { method: 'nmr' }; }), /unknown analysis method "nmr"/],
+    [mutate((d) => { (d.alarm_settings as Record<string, unknown>).fall_away_c = 0; }), /alarm_settings.fall_away_c must be a number > 0/],
+    [mutate((d) => { d.alarm_settings = 'loud'; }), /"alarm_settings" must be an object/],
   ])('parseRunRecordJson refuses a bad file with its reason (%#)', (text, reason) => {
     expect(refusal(text)).toMatch(reason);
   });

@@ -35,6 +35,8 @@ describe('validateRunRecord', () => {
     expect(fieldOf({ ...record, readings: { time_s: [0, NaN], head_c: [1, 2] } })).toBe('readings.time_s[1]');
     expect(fieldOf({ ...record, alerts: [{ id: 'a', kind: 'k', message: 'm', action: 'x', time_s: 1, raised_at: 'noon', acknowledged_at: null, snoozes: [] }] })).toBe('alerts[0].raised_at');
     expect(fieldOf({ ...record, receivers: [{ receiver: 0, time_s: 0, head_c: null }] })).toBe('receivers[0].receiver');
+    expect(fieldOf({ ...record, alarm_settings: { breakthrough_rise_c: 1, fall_away_c: 4, no_vapour_s: -5, sensor_silence_s: 5 } })).toBe('alarm_settings.no_vapour_s');
+    expect(fieldOf({ ...record, alarm_settings: { breakthrough_rise_c: 1, fall_away_c: 4, no_vapour_s: 1800, sensor_silence_s: 5 } })).toBeNull();
     const { plan: _plan, ...withoutPlan } = record;
     expect(fieldOf(withoutPlan)).toBe('plan');
   });

@@ -15,5 +15,5 @@ export type { PlateEstimate } from './runPlates.ts';
 export { resolveCharge } from './resolveCharge.ts';
 export { runTimeline } from './runTimeline.ts';
 export type { TimelineEntry } from './runTimeline.ts';
-export { reportText, clockTime, compositionWords, chargeWords, columnWords, plateWords } from './reportText.ts';
+export { reportText, clockTime, compositionWords, chargeWords, columnWords, plateWords, alarmSettingsWords } from './reportText.ts';
 export { volumeCurve } from './volumeCurve.ts';

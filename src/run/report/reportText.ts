@@ -24,6 +24,14 @@ export function chargeWords(run: Pick<RunRecord, 'charge'>, figures: Figures = f
   return run.charge.map((c) => `${c.name} ${String(c.amount).replace('.', figures.style.decimalMark)} ${c.unit}`).join(', ') || 'not recorded';
 }
 
+/** The alarm thresholds the run was watched with, or null for a record without them. */
+export function alarmSettingsWords(run: Pick<RunRecord, 'alarm_settings'>, figures: Figures = figuresFor()): string | null {
+  const a = run.alarm_settings;
+  if (!a) return null;
+  const minutes = Math.round(a.no_vapour_s / 60);
+  return `cut at ${figures.temperatureDifference(a.breakthrough_rise_c)} above a plateau; stall at ${figures.temperatureDifference(a.fall_away_c)} below it, or no vapour after ${minutes} min; sensor alarm after ${figures.number(a.sensor_silence_s, 0)} s without readings`;
+}
+
 /** The column as written, with the plates planned. */
 export function columnWords(run: Pick<RunRecord, 'column'>): string {
   return run.column ? `${run.column.description}${run.column.theoretical_plates != null ? `, ${run.column.theoretical_plates} plates planned` : ''}` : 'not recorded';
@@ -49,6 +57,8 @@ export function reportText(run: RunRecord, report: RunReport, figures: Figures =
   lines.push(`Pressure: ${figures.pressure(report.pressurePa)}${run.pressure_pa == null ? ' (assumed)' : ''}`);
   lines.push(`Column: ${columnWords(run)}`);
   lines.push(`Source: ${run.source.label}`);
+  const alarms = alarmSettingsWords(run, figures);
+  if (alarms) lines.push(`Alarms: ${alarms}`);
   lines.push(`Heat: ${run.heat_changes.length === 0 ? 'no changes recorded' : run.heat_changes.map((h) => `${clockTime(h.time_s)} ${h.text}`).join('; ')}`);
   lines.push('', 'Timeline:');
   for (const e of runTimeline(run)) lines.push(`  ${clockTime(e.timeS)}  ${e.kind}: ${e.text}${e.headC != null ? ` at ${degrees(e.headC)}` : ''}`);

@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'preact/hooks';
 import { ReadingBuffer, runRecordToJson, runTraceCsv, type RunRecord } from '../../run/index.ts';
-import { buildRunReport, chargeWords, clockTime, columnWords, plateMethod, reportText, runTimeline, volumeCurve } from '../../run/report/index.ts';
+import { alarmSettingsWords, buildRunReport, chargeWords, clockTime, columnWords, plateMethod, reportText, runTimeline, volumeCurve } from '../../run/report/index.ts';
 import type { Figures } from '../../science/index.ts';
 import { TraceChart } from '../chart/TraceChart.tsx';
 import { runFileName, type FileActions } from './fileActions.ts';
@@ -57,6 +57,7 @@ export function ReportScreen({ run, files, figures, onOpenFractions, onBack, bac
         <div><dt>Charge</dt><dd>{chargeWords(run, figures)}</dd></div>
         <div><dt>Pressure</dt><dd>{figures.pressure(report.pressurePa)}{run.pressure_pa == null ? ' (assumed)' : ''}</dd></div>
         <div><dt>Column</dt><dd>{columnWords(run)}</dd></div>
+        {run.alarm_settings && <div><dt>Alarms</dt><dd>{alarmSettingsWords(run, figures)}</dd></div>}
         <div><dt>Heat</dt><dd>{run.heat_changes.length === 0 ? 'no changes recorded' : run.heat_changes.map((h) => `${clockTime(h.time_s)} ${h.text}`).join('; ')}</dd></div>
       </dl>
       {report.problems.map((p) => <p key={p} class="notice">{p}</p>)}

@@ -91,7 +91,9 @@ describe('buildRunReport', () => {
 
   it('reportText names the charge, pressure, fractions, recovery, mass balance and plates', () => {
     const { record } = withFractions();
+    record.alarm_settings = { breakthrough_rise_c: 1, fall_away_c: 4, no_vapour_s: 1800, sensor_silence_s: 5 };
     const text = reportText(record, buildRunReport(record));
+    expect(text).toContain('Alarms: cut at 1.0 °C above a plateau; stall at 4.0 °C below it, or no vapour after 30 min; sensor alarm after 5 s without readings');
     for (const part of ['Charge: ethyl acetate 30 mL', 'Pressure: 101.3 kPa', 'Receiver 3:', 'Recovery', 'Mass balance: charged', 'theoretical plates', 'HETP']) {
       expect(text).toContain(part);
     }
