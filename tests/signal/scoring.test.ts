@@ -40,6 +40,13 @@ describe('scoreRun', () => {
     expect(s.plateauHitCount).toBe(1);
     expect(s.breakthroughLatencyS).toEqual([14]);
   });
+  it('scoreRun counts a planned cut as the change-receiver alarm it is: it hits a breakthrough window, and a cut after the breakthrough is a nuisance', () => {
+    const hit = scoreRun(alarms, plateaus, [{ timeS: 420, kind: 'cut', headC: 62 }]);
+    expect(hit.hitCount.breakthrough).toBe(1);
+    expect(hit.breakthroughLatencyS).toEqual([9]);
+    const twice = scoreRun(alarms, plateaus, [{ timeS: 420, kind: 'breakthrough', headC: 62 }, { timeS: 430, kind: 'cut', headC: 63 }]);
+    expect([twice.hitCount.breakthrough, twice.falseAlarmCount, twice.nuisanceAlarmCount]).toEqual([1, 1, 1]);
+  });
   it('scoreRun counts a second alarm in a hit window as nuisance and false, and a stray as false', () => {
     const s = scoreRun(alarms, plateaus, [
       { timeS: 425, kind: 'breakthrough', headC: 62 }, { timeS: 470, kind: 'breakthrough', headC: 66 },

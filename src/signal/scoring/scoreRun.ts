@@ -9,6 +9,8 @@ export interface ScoredEvent {
 
 export const SCORED_ALARM_KINDS: readonly ScoredAlarmKind[] = ['vapour', 'breakthrough', 'stall', 'sensor-fault'];
 const ALARM_KINDS: ReadonlySet<string> = new Set(['vapour', 'breakthrough', 'stall', 'sensor-fault', 'cut']);
+/** A planned cut is the same alarm as a breakthrough (change receivers): it hits the same windows. */
+const windowKindOf = (kind: string): string => (kind === 'cut' ? 'breakthrough' : kind);
 
 export interface RunScore {
   truthCount: Record<ScoredAlarmKind, number>;
@@ -42,7 +44,7 @@ export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly Pla
     let isInsideHit = false;
     for (let i = 0; i < windows.length; i++) {
       const w = windows[i]!;
-      if (w.kind !== alarm.kind || alarm.timeS < w.fromS || alarm.timeS > w.toS) continue;
+      if (w.kind !== windowKindOf(alarm.kind) || alarm.timeS < w.fromS || alarm.timeS > w.toS) continue;
       if (!isHit[i]) {
         open = i;
         break;
