@@ -6,8 +6,10 @@ import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import {
   APPARATUS_DEFAULTS, MissingUnifacDataError, columnEquilibrium, componentDataFor, findCompound, heatForBoilup,
-  molesFromAmounts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type HeatStep, type StageEquilibrium,
+  molesFromAmounts, planCuts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type HeatStep, type StageEquilibrium,
 } from '../src/science/index.ts';
+import { toRunPlan } from '../src/run/index.ts';
+import type { CutWindow } from '../src/signal/index.ts';
 import { createRandom } from '../src/science/sensorModel/index.ts';
 import type { PurityInterval, RunTruth, TruthEvent } from '../src/signal/scoring/index.ts';
 import type { CorpusRunSpec, TruthSource, TruthSourceResult } from './corpus.ts';
@@ -23,6 +25,25 @@ interface SimulationPlan {
   roomK: number;
   /** Vapour reaching the head once warm, scaled by the spec's heat. Units: mL/min. */
   boilupMlPerMin: number;
+}
+
+/**
+ * The cut plan the app would make for a corpus run's charge on Prepare (the science core's
+ * planner, UNIFAC where it can), as receiver windows for the watcher.
+ */
+export function cutWindowsFor(spec: CorpusRunSpec): CutWindow[] {
+  const plan = planFor(spec);
+  const chargeMol = molesFromAmounts(plan.compounds, plan.chargeMl.map((ml) => ml * 1e-6), 'volume');
+  const total = chargeMol.reduce((a, b) => a + b, 0);
+  const input = { compounds: plan.compounds, x: chargeMol.map((n) => n / total), chargeMol: total, pPa: spec.pressurePa, plates: spec.plates };
+  let cut;
+  try {
+    cut = planCuts({ ...input, model: 'unifac' });
+  } catch (error) {
+    if (!(error instanceof MissingUnifacDataError)) throw error;
+    cut = planCuts({ ...input, model: 'ideal' });
+  }
+  return toRunPlan(cut, spec.pressurePa, spec.plates).windows;
 }
 
 function planFor(spec: CorpusRunSpec): SimulationPlan {
