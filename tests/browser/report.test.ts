@@ -89,7 +89,7 @@ describe('From Prepare through a simulated run to the report', () => {
     await page.getByRole('button', { name: 'Heat on: start the run' }).click();
     await page.getByTestId('head-temp').waitFor();
 
-    // Watch, on the chosen scale: cyclohexane boils at 80.7 degC (CRC Handbook 95th ed., from memory), 177 degF.
+    // Watch, on the chosen scale: cyclohexane boils at 353.85 K, 80.7 degC (CRC Handbook 95th ed., as in tests/fixtures/boilingPoints.ts), 177 degF.
     expect(await page.locator('.head-unit').textContent()).toBe('°F');
     // The simulator's expected trace, computed in a worker, is drawn behind the readings.
     expect(await page.getByText('Whole run (faint line: predicted)').count()).toBe(1);
@@ -98,7 +98,7 @@ describe('From Prepare through a simulated run to the report', () => {
     await waitForHead(page, degF(70));
     await waitForHead(page, degF(90));
     await changeReceiver(page);
-    // Toluene boils at 110.6 degC (CRC Handbook 95th ed., from memory): wait for its plateau.
+    // Toluene boils at 383.75 K, 110.6 degC (CRC Handbook 95th ed., as in tests/fixtures/boilingPoints.ts): wait for its plateau.
     await waitForHead(page, degF(106));
     const ack = page.locator('.alarm-ack');
     if (await ack.isVisible()) await ack.click({ force: true });
