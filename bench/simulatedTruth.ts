@@ -5,8 +5,8 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import {
-  APPARATUS_DEFAULTS, MissingUnifacDataError, columnEquilibrium, componentDataFor, findCompound, heatForBoilup,
-  molesFromAmounts, planCuts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type HeatStep, type StageEquilibrium,
+  APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, preferredColumnEquilibrium, findCompound, heatForBoilup,
+  molesFromAmounts, planCuts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type HeatStep,
 } from '../src/science/index.ts';
 import { toRunPlan } from '../src/run/index.ts';
 import type { CutWindow } from '../src/signal/index.ts';
@@ -62,17 +62,8 @@ function planFor(spec: CorpusRunSpec): SimulationPlan {
   };
 }
 
-function equilibriumFor(compounds: Compound[]): StageEquilibrium {
-  try {
-    return columnEquilibrium(compounds, 'unifac');
-  } catch (error) {
-    if (error instanceof MissingUnifacDataError) return columnEquilibrium(compounds, 'ideal');
-    throw error;
-  }
-}
-
 function simulate(plan: SimulationPlan, spec: CorpusRunSpec, heat: (fullW: number) => HeatStep[], durationS: number): BatchStillRun {
-  const equilibrium = equilibriumFor(plan.compounds);
+  const { equilibrium } = preferredColumnEquilibrium(plan.compounds);
   const components = componentDataFor(plan.compounds);
   const chargeMol = molesFromAmounts(plan.compounds, plan.chargeMl.map((ml) => ml * 1e-6), 'volume');
   // Heat set so the heaviest component still comes over at the boil-up: a mantle turned up

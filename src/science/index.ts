@@ -8,7 +8,7 @@ export * from './solver/index.ts';
 // The column simulator's own cut plan (what receivers collect) is not the planner's CutPlan.
 export {
   constantVolatilityEquilibrium, raoultEquilibrium, simulateBatchStill, findPlateaus, APPARATUS_DEFAULTS,
-  fenskeStages, estimatePlatesFromFractions, fitPlatesToHeadCurve, columnEquilibrium, componentDataFor, heatForBoilup, predictHeadTrace,
+  fenskeStages, estimatePlatesFromFractions, fitPlatesToHeadCurve, columnEquilibrium, preferredColumnEquilibrium, componentDataFor, heatForBoilup, predictHeadTrace,
 } from './column/index.ts';
 export type {
   StageEquilibrium, ComponentData, ConstantVolatilityOptions, SaturationPressure, BatchStillConfig, ColumnSpec,

@@ -1,5 +1,6 @@
 import type { Compound } from '../compounds/compound.ts';
 import { prepareMixture } from '../vle/prepareMixture.ts';
+import { MissingUnifacDataError } from '../vle/unifacModel.ts';
 import type { ThermoModel } from '../vle/thermoModel.ts';
 import type { StageEquilibrium } from './stageEquilibrium.ts';
 
@@ -49,4 +50,17 @@ export function columnEquilibrium(compounds: readonly Compound[], model: ThermoM
       return mixture.bubbleTInto(clamped, pPa, yOut, guessK > 0 ? guessK : undefined);
     },
   };
+}
+
+/**
+ * The column equilibrium by UNIFAC where it has every group pair (real mixtures: alcohols and
+ * water), else by Raoult's law; with the model it used.
+ */
+export function preferredColumnEquilibrium(compounds: readonly Compound[]): { equilibrium: StageEquilibrium; model: ThermoModel } {
+  try {
+    return { equilibrium: columnEquilibrium(compounds, 'unifac'), model: 'unifac' };
+  } catch (error) {
+    if (!(error instanceof MissingUnifacDataError)) throw error;
+    return { equilibrium: columnEquilibrium(compounds, 'ideal'), model: 'ideal' };
+  }
 }

@@ -21,7 +21,7 @@ export { fenskeStages, estimatePlatesFromFractions } from './fenskeStages.ts';
 export type { PlateEstimate } from './fenskeStages.ts';
 export { fitPlatesToHeadCurve } from './fitPlatesToHeadCurve.ts';
 export type { HeadCurve, PlateFit } from './fitPlatesToHeadCurve.ts';
-export { columnEquilibrium } from './columnEquilibrium.ts';
+export { columnEquilibrium, preferredColumnEquilibrium } from './columnEquilibrium.ts';
 export { componentDataFor } from './componentDataFor.ts';
 export type { SimulatorComponentData } from './componentDataFor.ts';
 export { heatForBoilup } from './heatForBoilup.ts';

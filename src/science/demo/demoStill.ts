@@ -11,10 +11,10 @@
  *
  * Pure: time comes in as the step length; no clock is read.
  */
-import { findCompound, type Compound } from '../compounds/index.ts';
-import { MissingUnifacDataError, molesFromAmounts, type ThermoModel } from '../vle/index.ts';
+import { findCompound } from '../compounds/index.ts';
+import { molesFromAmounts } from '../vle/index.ts';
 import { APPARATUS_DEFAULTS } from '../column/apparatusDefaults.ts';
-import { columnEquilibrium } from '../column/columnEquilibrium.ts';
+import { columnEquilibrium, preferredColumnEquilibrium } from '../column/columnEquilibrium.ts';
 import { componentDataFor } from '../column/componentDataFor.ts';
 import { heatForBoilup } from '../column/heatForBoilup.ts';
 import { simulateBatchStill } from '../column/simulateBatchStill.ts';
@@ -102,23 +102,13 @@ interface Playback {
 const DURATION_S = 4 * 3600;
 const cache = new Map<string, Playback>();
 
-/** UNIFAC where it has every pair (real mixtures: alcohols and water), else Raoult's law. */
-function equilibriumFor(compounds: readonly Compound[]): { equilibrium: ReturnType<typeof columnEquilibrium>; model: ThermoModel } {
-  try {
-    return { equilibrium: columnEquilibrium(compounds, 'unifac'), model: 'unifac' };
-  } catch (error) {
-    if (!(error instanceof MissingUnifacDataError)) throw error;
-    return { equilibrium: columnEquilibrium(compounds, 'ideal'), model: 'ideal' };
-  }
-}
-
 function simulateDemo(charge: DemoCharge | undefined, roomC: number, pressurePa: number, plates: number, boilupMlPerMin: number, reflux: number, probeTauS: number): Playback {
   const key = JSON.stringify([charge ?? null, roomC, pressurePa, plates, boilupMlPerMin, reflux, probeTauS]);
   const cached = cache.get(key);
   if (cached) return cached;
   // The demo's own charge keeps Raoult's law, as it always has; a prepared charge gets UNIFAC where it can.
   const compounds = charge ? charge.names.map((name) => findCompound(name)) : [...demoMixture.compounds];
-  const equilibrium = charge ? equilibriumFor(compounds).equilibrium : columnEquilibrium(compounds, 'ideal');
+  const equilibrium = charge ? preferredColumnEquilibrium(compounds).equilibrium : columnEquilibrium(compounds, 'ideal');
   const components = componentDataFor(compounds);
   const chargeMol = charge ? [...charge.chargeMol] : molesFromAmounts(compounds, demoMixture.chargeMl.map((ml) => ml * 1e-6), 'volume');
   const total = chargeMol.reduce((a, b) => a + b, 0);
