@@ -1,10 +1,10 @@
 import type { Alerter, ScreenWakeLock } from '../alerts/index.ts';
 import type { Clock } from '../sensor/clock.ts';
-import { AlarmBook, ReadingBuffer, createRunHeader, currentReceiver, type Alarm, type AlarmBookState, type NewRun, type RunHeader } from '../run/index.ts';
+import { AlarmBook, ReadingBuffer, createRunHeader, currentReceiver, type Alarm, type AlarmBookState, type AlarmSettingsRecord, type NewRun, type RunHeader } from '../run/index.ts';
 import { figuresFor, type Figures } from '../science/units/index.ts';
 import { RunJournal, type KeyValueStore } from '../store/index.ts';
 import { sensorSilentWording, wordEvent } from './alarmWording.ts';
-import type { AlarmThresholds, LiveSource, RunWatcher, SessionReading, WatcherEvent } from './types.ts';
+import type { LiveSource, RunWatcher, SessionReading, WatcherEvent } from './types.ts';
 
 export interface SessionDeps {
   store: KeyValueStore;
@@ -13,8 +13,8 @@ export interface SessionDeps {
   wallMs(): number;
   alerter: Alerter | null;
   wakeLock: ScreenWakeLock | null;
-  /** A new watcher for the plan (with the chemist's thresholds), or the saved one resumed. */
-  createWatcher(plan: unknown, saved?: unknown, thresholds?: AlarmThresholds): RunWatcher;
+  /** A new watcher for the plan (with the run's alarm thresholds), or the saved one resumed. */
+  createWatcher(plan: unknown, saved?: unknown, settings?: AlarmSettingsRecord): RunWatcher;
   /** Told how long each journal flush took (for User Timing in the browser, read by bench/). */
   onFlushTimed?(startMs: number, durationMs: number, readings: number): void;
 }
@@ -74,17 +74,11 @@ export class RunSession {
     this.#lastReadingWallMs = deps.wallMs();
   }
 
-  /** Heat on: a new run starts journalling at once. Thresholds absent: the watcher's defaults. */
-  static async start(
-    deps: SessionDeps,
-    run: Omit<NewRun, 'startedAt'>,
-    source: LiveSource,
-    timings = defaultTimings,
-    thresholds?: AlarmThresholds,
-  ): Promise<RunSession> {
+  /** Heat on: a new run starts journalling at once, watched with `run.alarmSettings` (the watcher's defaults when absent). */
+  static async start(deps: SessionDeps, run: Omit<NewRun, 'startedAt'>, source: LiveSource, timings = defaultTimings): Promise<RunSession> {
     const header = createRunHeader({ ...run, startedAt: new Date(deps.wallMs()).toISOString() });
     const journal = await RunJournal.start(deps.store, header, deps.wallMs());
-    const session = new RunSession(deps, timings, header, journal, deps.createWatcher(header.plan, undefined, thresholds), new AlarmBook({ repeatMs: timings.alarmRepeatMs }));
+    const session = new RunSession(deps, timings, header, journal, deps.createWatcher(header.plan, undefined, header.alarm_settings), new AlarmBook({ repeatMs: timings.alarmRepeatMs }));
     session.#attach(source);
     await deps.wakeLock?.keepOn();
     return session;

@@ -1,5 +1,6 @@
 import { RunWatcher as Detector, type CutWindow, type WatcherOptions } from '../signal/index.ts';
-import type { AlarmThresholds, RunWatcher, WatcherEvent } from './types.ts';
+import type { AlarmSettingsRecord } from '../run/index.ts';
+import type { RunWatcher, WatcherEvent } from './types.ts';
 
 /** Receiver windows from a run's plan (`plan.windows`), or none. */
 export function planCutWindows(plan: unknown): CutWindow[] {
@@ -11,22 +12,23 @@ export function planCutWindows(plan: unknown): CutWindow[] {
 }
 
 /**
- * The chemist's thresholds as detector options. The CUSUM reference is half the rise worth
- * detecting (signal/README.md), so it follows the breakthrough rise.
+ * The run's alarm thresholds (Settings at heat on, kept in the record) as detector options. The
+ * CUSUM reference is half the rise worth detecting (signal/README.md), so it follows the
+ * breakthrough rise. The sensor-silence limit is the session's, not the detector's.
  */
-export function watcherOptionsFor(thresholds: AlarmThresholds): Partial<WatcherOptions> {
+export function watcherOptionsFor(settings: AlarmSettingsRecord): Partial<WatcherOptions> {
   return {
-    breakthroughMinRiseC: thresholds.breakthroughRiseC,
-    breakthroughReferenceC: thresholds.breakthroughRiseC / 2,
-    noVapourStallS: thresholds.noVapourS,
-    fallAwayC: thresholds.fallAwayC,
+    breakthroughMinRiseC: settings.breakthrough_rise_c,
+    breakthroughReferenceC: settings.breakthrough_rise_c / 2,
+    noVapourStallS: settings.no_vapour_s,
+    fallAwayC: settings.fall_away_c,
   };
 }
 
 /** The signal layer's detector behind the live run's watcher interface; its state saves as JSON text. */
-export function createSignalWatcher(plan: unknown, saved?: unknown, thresholds?: AlarmThresholds): RunWatcher {
+export function createSignalWatcher(plan: unknown, saved?: unknown, settings?: AlarmSettingsRecord): RunWatcher {
   const detector =
-    typeof saved === 'string' ? Detector.restore(saved) : new Detector(thresholds ? watcherOptionsFor(thresholds) : {}, planCutWindows(plan));
+    typeof saved === 'string' ? Detector.restore(saved) : new Detector(settings ? watcherOptionsFor(settings) : {}, planCutWindows(plan));
   return {
     push(timeS, headC) {
       return detector.push(timeS, headC).map(

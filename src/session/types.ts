@@ -28,19 +28,6 @@ export interface WatcherEvent {
   [detail: string]: unknown;
 }
 
-/**
- * The chemist's alarm thresholds from Settings, fixed for a run when it starts (a reopened run
- * keeps the ones saved in its watcher state).
- */
-export interface AlarmThresholds {
-  /** Rise above the plateau that is a breakthrough. Units: degC */
-  breakthroughRiseC: number;
-  /** Heating with no vapour at the head before a stall. Units: s */
-  noVapourS: number;
-  /** Fall below the plateau that is a stall rather than the pre-cut sag. Units: degC */
-  fallAwayC: number;
-}
-
 /** The detector as the live run uses it: one reading in, zero or more events out. */
 export interface RunWatcher {
   push(timeS: number, headC: number): WatcherEvent[];

@@ -2,7 +2,7 @@ import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import type { AlarmSettingsRecord, RunHeader, RunPlan } from '../run/index.ts';
 import { demoMixtureWords as demoMixture } from '../science/demo/demoMixtureWords.ts';
 import type { DemoStillSnapshot } from '../science/demo/index.ts';
-import { RunSession, defaultTimings, type AlarmThresholds, type LiveSource, type SessionTimings } from '../session/index.ts';
+import { RunSession, defaultTimings, type LiveSource, type SessionTimings } from '../session/index.ts';
 import { RunJournal, defaultSettings, loadSettings, saveSettings, type Settings } from '../store/index.ts';
 import { queueEndedRuns, readSyncLink, startSyncTriggers } from '../sync/index.ts';
 import { AlarmBanner } from './alarm/AlarmBanner.tsx';
@@ -49,7 +49,7 @@ function timingsFor(settings: Settings): SessionTimings {
   };
 }
 
-/** The thresholds as the run record keeps them, for the write-up. */
+/** The alarm thresholds the run is watched with, kept in its record for the write-up. */
 function alarmSettingsFor(settings: Settings): AlarmSettingsRecord {
   return {
     breakthrough_rise_c: settings.breakthroughRiseC,
@@ -57,11 +57,6 @@ function alarmSettingsFor(settings: Settings): AlarmSettingsRecord {
     no_vapour_s: settings.noVapourMin * 60,
     sensor_silence_s: settings.sensorSilenceS,
   };
-}
-
-/** The chemist's alarm thresholds for the run watcher. */
-function thresholdsFor(settings: Settings): AlarmThresholds {
-  return { breakthroughRiseC: settings.breakthroughRiseC, noVapourS: settings.noVapourMin * 60, fallAwayC: settings.fallAwayC };
 }
 
 function applySettings(services: AppServices, settings: Settings): void {
@@ -249,7 +244,6 @@ export function App({ services, updates }: AppProps) {
         },
         source,
         timingsFor(settings),
-        thresholdsFor(settings),
       );
       setSensor(null);
       setRestoredSensor(null);

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { createSignalWatcher, watcherOptionsFor, type AlarmThresholds, type WatcherEvent } from '../../src/session/index.ts';
+import type { AlarmSettingsRecord } from '../../src/run/index.ts';
+import { createSignalWatcher, watcherOptionsFor, type WatcherEvent } from '../../src/session/index.ts';
 
 // A shaped demo trace, not data: room temperature, vapour, a plateau at 77 degC for 15 min,
 // then a climb of 0.05 degC/s. One reading a second.
-function feed(thresholds?: AlarmThresholds): WatcherEvent[] {
+function feed(thresholds?: AlarmSettingsRecord): WatcherEvent[] {
   const watcher = createSignalWatcher(null, undefined, thresholds);
   const events: WatcherEvent[] = [];
   for (let t = 0; t <= 2400; t++) {
@@ -21,7 +22,7 @@ const firstOf = (events: WatcherEvent[], kind: string) => events.find((e) => e.e
 
 describe('the chemist\'s alarm thresholds reach the run watcher', () => {
   it('watcherOptionsFor keeps the CUSUM reference at half the rise worth detecting', () => {
-    expect(watcherOptionsFor({ breakthroughRiseC: 2, noVapourS: 900, fallAwayC: 5 })).toEqual({
+    expect(watcherOptionsFor({ breakthrough_rise_c: 2, fall_away_c: 5, no_vapour_s: 900, sensor_silence_s: 5 })).toEqual({
       breakthroughMinRiseC: 2,
       breakthroughReferenceC: 1,
       noVapourStallS: 900,
@@ -31,7 +32,7 @@ describe('the chemist\'s alarm thresholds reach the run watcher', () => {
 
   it('a larger breakthrough rise calls the cut later, after the head has risen at least that far', () => {
     const usual = firstOf(feed(), 'breakthrough');
-    const later = firstOf(feed({ breakthroughRiseC: 3, noVapourS: 1800, fallAwayC: 4 }), 'breakthrough');
+    const later = firstOf(feed({ breakthrough_rise_c: 3, fall_away_c: 4, no_vapour_s: 1800, sensor_silence_s: 5 }), 'breakthrough');
     expect(usual).toBeDefined();
     expect(later).toBeDefined();
     expect(later!.time_s).toBeGreaterThan(usual!.time_s);
@@ -40,7 +41,7 @@ describe('the chemist\'s alarm thresholds reach the run watcher', () => {
   });
 
   it('a shorter no-vapour time raises the stall sooner when the head stays cold', () => {
-    const watcher = createSignalWatcher(null, undefined, { breakthroughRiseC: 1, noVapourS: 600, fallAwayC: 4 });
+    const watcher = createSignalWatcher(null, undefined, { breakthrough_rise_c: 1, fall_away_c: 4, no_vapour_s: 600, sensor_silence_s: 5 });
     const events: WatcherEvent[] = [];
     for (let t = 0; t <= 900; t++) events.push(...watcher.push(t, 21));
     const stall = firstOf(events, 'stall');
@@ -50,7 +51,7 @@ describe('the chemist\'s alarm thresholds reach the run watcher', () => {
   });
 
   it('a reopened run keeps the thresholds it started with', () => {
-    const watcher = createSignalWatcher(null, undefined, { breakthroughRiseC: 1, noVapourS: 600, fallAwayC: 4 });
+    const watcher = createSignalWatcher(null, undefined, { breakthrough_rise_c: 1, fall_away_c: 4, no_vapour_s: 600, sensor_silence_s: 5 });
     for (let t = 0; t < 300; t++) watcher.push(t, 21);
     const resumed = createSignalWatcher(null, watcher.toState());
     const events: WatcherEvent[] = [];
