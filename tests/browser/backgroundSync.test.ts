@@ -2,7 +2,7 @@ import { afterAll, beforeAll, expect, it } from 'vitest';
 import type { Browser, BrowserContext } from 'playwright-core';
 import { launchChromium, phoneContext, untilServiceWorkerControls } from './support/browser.ts';
 import { startBuiltAppLab, type BuiltAppLab } from './support/builtAppLab.ts';
-import { startDemoRun } from './support/demoRun.ts';
+import { finishDemoRunUnsent } from './support/demoRun.ts';
 
 // A lab server of this test's own (its origin, data folder and token), so the run it sends is
 // the only one there and other tests' servers and registrations are not touched.
@@ -47,15 +47,7 @@ it("the service worker's sync handler sends a run finished offline after the app
   await untilServiceWorkerControls(page);
 
   await context.setOffline(true);
-  await startDemoRun(page, 10);
-  await page.waitForFunction(() => {
-    const text = document.querySelector('[data-testid="elapsed"]')?.textContent;
-    return text !== undefined && text !== '0:00';
-  });
-  await page.getByRole('button', { name: 'End run' }).click();
-  await page.getByRole('dialog').getByRole('button', { name: 'End run' }).click();
-  await page.getByRole('heading', { name: 'Run ended' }).waitFor();
-  await page.waitForFunction(() => document.querySelector('[data-testid="sync-state"]')?.getAttribute('data-state') === 'failed');
+  await finishDemoRunUnsent(page);
 
   const { runIds, tags } = await page.evaluate(async () => {
     const db = await new Promise<IDBDatabase>((resolve, reject) => {

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchChromium, phoneContext } from './support/browser.ts';
+import { heatOnThroughChecklist } from './support/demoRun.ts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -53,11 +54,7 @@ describe('Prepare screen on a phone', () => {
     await page.getByRole('button', { name: 'Use this plan' }).click();
     await page.getByRole('button', { name: 'Simulate it' }).click();
     await page.getByRole('heading', { name: 'Before heat on' }).waitFor();
-    const boxes = page.getByRole('checkbox');
-    const count = await boxes.count();
-    for (let i = 0; i < count; i++) await boxes.nth(i).check();
-    await page.getByRole('button', { name: 'Heat on: start the run' }).click();
-    await page.getByTestId('head-temp').waitFor();
+    await heatOnThroughChecklist(page);
     expect(await page.getByTestId('receiver').textContent()).toMatch(/^1 \d+–71 °C$/);
     expect(await page.locator('.source-line').textContent()).toMatch(/Simulated/);
     expect(errors).toEqual([]);

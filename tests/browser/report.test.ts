@@ -2,7 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchChromium, phoneContext } from './support/browser.ts';
-import { recordAlertsScript } from './support/demoRun.ts';
+import { heatOnThroughChecklist, recordAlertsScript } from './support/demoRun.ts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -83,11 +83,7 @@ describe('From Prepare through a simulated run to the report', () => {
     await page.getByRole('button', { name: 'Use this plan' }).click();
     await page.getByRole('button', { name: 'Simulate it' }).click();
     await page.getByRole('heading', { name: 'Before heat on' }).waitFor();
-    const boxes = page.getByRole('checkbox');
-    const count = await boxes.count();
-    for (let i = 0; i < count; i++) await boxes.nth(i).check();
-    await page.getByRole('button', { name: 'Heat on: start the run' }).click();
-    await page.getByTestId('head-temp').waitFor();
+    await heatOnThroughChecklist(page);
 
     // Watch, on the chosen scale: cyclohexane boils at 353.85 K, 80.7 degC (CRC Handbook 95th ed., as in tests/fixtures/boilingPoints.ts), 177 degF.
     expect(await page.locator('.head-unit').textContent()).toBe('°F');

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchChromium, phoneContext, untilServiceWorkerControls } from './support/browser.ts';
-import { startDemoRun } from './support/demoRun.ts';
+import { finishDemoRunUnsent } from './support/demoRun.ts';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -20,16 +20,8 @@ it('a run finished offline is sent to the lab server when the network returns an
   expect(new URL(page.url()).hash).toBe('');
 
   await context.setOffline(true);
-  await startDemoRun(page, 10);
-  await page.waitForFunction(() => {
-    const text = document.querySelector('[data-testid="elapsed"]')?.textContent;
-    return text !== undefined && text !== '0:00';
-  });
-  await page.getByRole('button', { name: 'End run' }).click();
-  await page.getByRole('dialog').getByRole('button', { name: 'End run' }).click();
-  await page.getByRole('heading', { name: 'Run ended' }).waitFor();
+  await finishDemoRunUnsent(page);
   const line = page.getByTestId('sync-state');
-  await page.waitForFunction(() => document.querySelector('[data-testid="sync-state"]')?.getAttribute('data-state') === 'failed');
   expect(await line.textContent()).toMatch(/not sent yet.*could not be reached/);
 
   await context.setOffline(false);
