@@ -5,8 +5,9 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import {
-  APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, preferredColumnEquilibrium, findCompound, heatForBoilup,
-  molesFromAmounts, planCuts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type HeatStep,
+  APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, preferredColumnEquilibrium, findAzeotropes, findCompound, findPlateaus,
+  heatForBoilup, molesFromAmounts, planCuts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type ConstantBoilingVapour,
+  type HeatStep,
 } from '../src/science/index.ts';
 import { toRunPlan } from '../src/run/index.ts';
 import type { CutWindow } from '../src/signal/index.ts';
@@ -14,7 +15,7 @@ import { createRandom } from '../src/science/sensorModel/index.ts';
 import type { PurityInterval, RunTruth, TruthEvent } from '../src/signal/scoring/index.ts';
 import type { CorpusRunSpec, TruthSource, TruthSourceResult } from './corpus.ts';
 
-const VERSION = 'sim-truth-2';
+const VERSION = 'sim-truth-3';
 const CACHE_DIR = '.bench/simulated-truth';
 
 /** How a spec becomes a simulation: charge, reflux, boil-up and the heat schedule. */
@@ -99,15 +100,37 @@ function vapourArrivalS(run: BatchStillRun): number | null {
   return flagS;
 }
 
+/**
+ * The azeotropes of the charge's pairs at the run's pressure, in the model the run was simulated
+ * with, as vapours that come over as one component (the pair's larger part). A constant-boiling
+ * mixture holds the head as steady as a pure component does, and the chemist cuts when it is
+ * spent; the issue's 90 %-one-component rule would count the methanol-toluene azeotrope (about
+ * 88 mol % methanol) in some runs and not in others as the pressure moves it across 90 %.
+ */
+function constantBoilingVapours(compounds: readonly Compound[], pressurePa: number): ConstantBoilingVapour[] {
+  const { model } = preferredColumnEquilibrium(compounds);
+  const vapours: ConstantBoilingVapour[] = [];
+  for (const pair of findAzeotropes(compounds, pressurePa, model)) {
+    const a = compounds.findIndex((c) => c.name === pair.pair[0]);
+    const b = compounds.findIndex((c) => c.name === pair.pair[1]);
+    for (const azeotrope of pair.azeotropes) {
+      const y = compounds.map((_, i) => (i === a ? azeotrope.x1 : i === b ? 1 - azeotrope.x1 : 0));
+      vapours.push({ component: azeotrope.x1 >= 0.5 ? a : b, y });
+    }
+  }
+  return vapours;
+}
+
 /** Noise-free truth from a run, cut at endS: purity intervals, vapour, and the stalls given. */
-function truthFrom(run: BatchStillRun, plan: SimulationPlan, endS: number, stalls: TruthEvent[], extraEvents: TruthEvent[] = []): RunTruth {
+function truthFrom(run: BatchStillRun, plan: SimulationPlan, spec: CorpusRunSpec, endS: number, stalls: TruthEvent[], extraEvents: TruthEvent[] = []): RunTruth {
   const n = Math.min(run.trace.timeS.length, Math.floor(endS) + 1);
   const timeS = run.trace.timeS.slice(0, n);
   const headC = run.trace.headK.slice(0, n).map((k) => k - 273.15);
   const a = run.annotations;
   const cutAt = Math.min(endS, ...stalls.map((s) => s.timeS));
   const purityIntervals: PurityInterval[] = [];
-  for (const p of a.plateaus) {
+  const plateaus = findPlateaus(run.trace, APPARATUS_DEFAULTS.vapourSeenMolPerS, 0.9, constantBoilingVapours(plan.compounds, spec.pressurePa));
+  for (const p of plateaus) {
     // The first plateau starts as the vapour arrives: its level is the steady part after the jump.
     const startS = a.vapourArrivalS !== null && Math.abs(p.fromS - a.vapourArrivalS) < 60 ? p.fromS + 60 : p.fromS;
     const stretch = a.vapourAtHead.find((v) => v.fromS <= p.fromS + 1 && v.toS >= p.fromS);
@@ -136,29 +159,29 @@ function build(spec: CorpusRunSpec): RunTruth {
       const arrival = vapourArrivalS(run);
       const end = endBeforeDry(run, durationS + upS);
       const slow: TruthEvent[] = arrival !== null && arrival > 900 ? [{ kind: 'stall', timeS: arrival, cause: 'slow-start' }] : [];
-      return truthFrom(run, plan, end, [], slow);
+      return truthFrom(run, plan, spec, end, [], slow);
     }
     case 'heat-lost': {
       const normal = simulate(plan, spec, steady, durationS);
       const first = normal.annotations.plateaus[0];
-      if (!first) return truthFrom(normal, plan, endBeforeDry(normal, durationS), []);
+      if (!first) return truthFrom(normal, plan, spec, endBeforeDry(normal, durationS), []);
       const dry = normal.annotations.potDryS ?? durationS;
       const offS = first.fromS + 300 + (Math.min(dry, normal.annotations.plateaus.at(-1)!.toS) - first.fromS - 600) * r.uniform();
       const tailS = 900 + 600 * r.uniform();
       const run = simulate(plan, spec, (w) => [{ fromS: 0, heatW: w }, { fromS: offS, heatW: 0 }], offS + tailS);
-      return truthFrom(run, plan, offS + tailS, [{ kind: 'stall', timeS: offS, cause: 'heat-lost' }]);
+      return truthFrom(run, plan, spec, offS + tailS, [{ kind: 'stall', timeS: offS, cause: 'heat-lost' }]);
     }
     case 'pot-dry': {
       const run = simulate(plan, spec, steady, durationS);
       const dry = run.annotations.potDryS;
-      if (dry === null) return truthFrom(run, plan, durationS, []);
-      return truthFrom(run, plan, Math.min(durationS, dry + 900 + 600 * r.uniform()), [{ kind: 'stall', timeS: dry, cause: 'pot-dry' }]);
+      if (dry === null) return truthFrom(run, plan, spec, durationS, []);
+      return truthFrom(run, plan, spec, Math.min(durationS, dry + 900 + 600 * r.uniform()), [{ kind: 'stall', timeS: dry, cause: 'pot-dry' }]);
     }
     default: {
       // 'normal', and 'creeping': a climb that never settles is not something this column model
       // makes on demand, so those specs run as normal runs (the synthetic corpus keeps them).
       const run = simulate(plan, spec, steady, durationS);
-      return truthFrom(run, plan, endBeforeDry(run, durationS), []);
+      return truthFrom(run, plan, spec, endBeforeDry(run, durationS), []);
     }
   }
 }

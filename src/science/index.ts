@@ -14,5 +14,5 @@ export type {
   StageEquilibrium, ComponentData, ConstantVolatilityOptions, SaturationPressure, BatchStillConfig, ColumnSpec,
   PotSpec, HeadSpec, HeatStep, CutPlan as StillCutPlan, HeadTemperatureWindow, TimeCut, VolumeCut, BatchStillRun,
   BatchStillTrace, BatchStillAnnotations, ReceiverContent, Plateau, Interval, PlateEstimate, HeadCurve, PlateFit,
-  SimulatorComponentData, BoilupHeatInput,
+  SimulatorComponentData, BoilupHeatInput, ConstantBoilingVapour,
 } from './column/index.ts';

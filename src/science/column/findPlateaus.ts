@@ -1,10 +1,24 @@
 import type { BatchStillTrace, Plateau } from './batchStillRun.ts';
 
 /**
- * Plateaus in a sampled trace: maximal runs of samples where vapour passes the thermometer
- * (at least vapourSeenMolPerS) and one component makes up at least `purity` of the top vapour.
+ * A constant-boiling vapour (an azeotrope's) that comes over as one component would: the head
+ * holds steady while the top vapour stays near it. `component` is the one it is counted as.
  */
-export function findPlateaus(trace: BatchStillTrace, vapourSeenMolPerS: number, purity = 0.9): Plateau[] {
+export interface ConstantBoilingVapour {
+  component: number;
+  /** Mole fractions of every component, summing to 1. */
+  y: readonly number[];
+}
+
+/**
+ * Plateaus in a sampled trace: maximal runs of samples where vapour passes the thermometer
+ * (at least vapourSeenMolPerS) and one component makes up at least `purity` of the top vapour,
+ * or the top vapour is as close to a constant-boiling vapour as that (in summed mole-fraction
+ * difference: 2 (1 - purity), which for a pure component is the same rule). The latter is
+ * counted as its `component`, so a run that slides from the azeotrope to the pure component
+ * is one plateau.
+ */
+export function findPlateaus(trace: BatchStillTrace, vapourSeenMolPerS: number, purity = 0.9, constantBoiling: readonly ConstantBoilingVapour[] = []): Plateau[] {
   const plateaus: Plateau[] = [];
   const count = trace.timeS.length;
   const componentCount = trace.topVapourMoleFraction.length;
@@ -28,6 +42,12 @@ export function findPlateaus(trace: BatchStillTrace, vapourSeenMolPerS: number, 
     if (trace.headVapourMolPerS[k]! >= vapourSeenMolPerS) {
       for (let i = 0; i < componentCount; i++) {
         if (trace.topVapourMoleFraction[i]![k]! >= purity) dominant = i;
+      }
+      for (const vapour of constantBoiling) {
+        if (dominant >= 0) break;
+        let distance = 0;
+        for (let i = 0; i < componentCount; i++) distance += Math.abs(trace.topVapourMoleFraction[i]![k]! - (vapour.y[i] ?? 0));
+        if (distance <= 2 * (1 - purity)) dominant = vapour.component;
       }
     }
     if (dominant !== current) {

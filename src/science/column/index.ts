@@ -15,7 +15,7 @@ export type {
   Interval,
 } from './batchStillRun.ts';
 export { simulateBatchStill } from './simulateBatchStill.ts';
-export { findPlateaus } from './findPlateaus.ts';
+export { findPlateaus, type ConstantBoilingVapour } from './findPlateaus.ts';
 export { APPARATUS_DEFAULTS } from './apparatusDefaults.ts';
 export { fenskeStages, estimatePlatesFromFractions } from './fenskeStages.ts';
 export type { PlateEstimate } from './fenskeStages.ts';

@@ -39,4 +39,23 @@ describe('findPlateaus', () => {
     expect(findPlateaus(trace([], [], []), 0.5)).toEqual([]);
     expect(findPlateaus(trace([0.99], [1], [350]), 0.5)).toHaveLength(1);
   });
+
+  it('counts a stretch near a constant-boiling vapour as its component, joined to the pure stretch after it', () => {
+    // An azeotrope of about 88 mol % of the first component (methanol and toluene at one
+    // atmosphere, 63.8 degC: CRC Handbook azeotrope table, from memory) comes over below the
+    // 90 % rule; with it named, the slide from it to 95 % is one plateau.
+    const top = [0.88, 0.87, 0.89, 0.95, 0.5, 0.05];
+    const head = [337, 337.2, 337.2, 337.4, 360, 383];
+    const azeotrope = { component: 0, y: [0.885, 0.115] };
+    expect(findPlateaus(trace(top, [1, 1, 1, 1, 1, 1], head), 0.5)).toEqual([
+      { fromS: 30, toS: 30, component: 0, medianHeadK: 337.4, fromM3: 3e-6, toM3: 3e-6 },
+      { fromS: 50, toS: 50, component: 1, medianHeadK: 383, fromM3: 1e-6 * 5, toM3: 1e-6 * 5 },
+    ]);
+    expect(findPlateaus(trace(top, [1, 1, 1, 1, 1, 1], head), 0.5, 0.9, [azeotrope])).toEqual([
+      { fromS: 0, toS: 30, component: 0, medianHeadK: 337.2, fromM3: 0, toM3: 3e-6 },
+      { fromS: 50, toS: 50, component: 1, medianHeadK: 383, fromM3: 1e-6 * 5, toM3: 1e-6 * 5 },
+    ]);
+    // 0.5 is 0.77 from the azeotrope in summed mole fractions: no plateau.
+    expect(findPlateaus(trace([0.5], [1], [350]), 0.5, 0.9, [azeotrope])).toEqual([]);
+  });
 });
