@@ -1,7 +1,8 @@
 // The run watcher against two naive peers on two seeded corpora with ground truth: runs of the
 // column simulator (physical) and the synthetic profiles (a second, shape-driven corpus); and
 // the watcher's throughput.
-// Also the watcher with the planner's cut plan for each run ("with plan").
+// Also the watcher told where the charge's plateaus can lie ("with charge"), and with the planner's cut plan
+// for each run as well ("with plan").
 // Run: npx tsx bench/detector.bench.ts [runs] [seed] [--quick] [--verbose] [--only simulated|synthetic]
 //      [--options '{"flatSlopeCPerS": 0.01}']
 // The simulated corpus's truth is cached under .bench/ (first build takes a few minutes).
@@ -12,7 +13,7 @@ import { scoreRun, summariseScores, truthWindows, type RunScore, type ScoredEven
 import { syntheticTruth } from '../tests/support/syntheticTruth.ts';
 import { makeCorpus, syntheticTruthSource, type CorpusRun, type TruthSource } from './corpus.ts';
 import { fixedAlarmPeer, slopePeer } from './peers.ts';
-import { cutWindowsFor, simulatedTruthSource } from './simulatedTruth.ts';
+import { cutWindowsFor, expectedPlateausFor, simulatedTruthSource } from './simulatedTruth.ts';
 
 const args = process.argv.slice(2);
 const positional = args.filter((a, i) => !a.startsWith('--') && args[i - 1] !== '--only' && args[i - 1] !== '--options');
@@ -28,12 +29,15 @@ const optionsIndex = args.indexOf('--options');
 const overrides = optionsIndex >= 0 ? (JSON.parse(args[optionsIndex + 1] ?? '{}') as Partial<WatcherOptions>) : {};
 
 type Detector = { name: string; run: (r: CorpusRun) => ScoredEvent[] };
-// 'with plan': the watcher given the cut plan the app would make on Prepare for the run's charge
+// 'with charge': the watcher told where the charge's plateaus can lie (the planner's expected
+// plateaus for the run's compounds at its pressure, as the fixed-alarm peer is told the boiling
+// points). 'with plan': that and the cut plan the app would make on Prepare for the run's charge
 // (both corpora name library compounds; the charge is the simulated one's). A planned cut scores
 // as the change-receiver alarm a breakthrough is.
 const detectors: Detector[] = [
   { name: 'run watcher', run: (r) => analyzeReadings(r.timeS, r.headC, [], overrides) },
-  { name: 'with plan', run: (r) => analyzeReadings(r.timeS, r.headC, cutWindowsFor(r.spec), overrides) },
+  { name: 'with charge', run: (r) => analyzeReadings(r.timeS, r.headC, { expectedPlateaus: expectedPlateausFor(r.spec) }, overrides) },
+  { name: 'with plan', run: (r) => analyzeReadings(r.timeS, r.headC, { plan: cutWindowsFor(r.spec), expectedPlateaus: expectedPlateausFor(r.spec) }, overrides) },
   { name: 'fixed bp+3', run: (r) => fixedAlarmPeer(r.timeS, r.headC, r.boilingPointsC) },
   { name: 'MA slope', run: (r) => slopePeer(r.timeS, r.headC) },
 ];

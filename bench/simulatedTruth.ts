@@ -5,12 +5,12 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import {
-  APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, preferredColumnEquilibrium, findAzeotropes, findCompound, findPlateaus,
+  APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, expectedPlateaus, preferredColumnEquilibrium, findAzeotropes, findCompound, findPlateaus,
   heatForBoilup, molesFromAmounts, planCuts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type ConstantBoilingVapour,
   type HeatStep,
 } from '../src/science/index.ts';
 import { toRunPlan } from '../src/run/index.ts';
-import type { CutWindow } from '../src/signal/index.ts';
+import type { CutWindow, ExpectedPlateau } from '../src/signal/index.ts';
 import { createRandom } from '../src/science/sensorModel/index.ts';
 import type { PurityInterval, RunTruth, TruthEvent } from '../src/signal/scoring/index.ts';
 import type { CorpusRunSpec, TruthSource, TruthSourceResult } from './corpus.ts';
@@ -45,6 +45,17 @@ export function cutWindowsFor(spec: CorpusRunSpec): CutWindow[] {
     cut = planCuts({ ...input, model: 'ideal' });
   }
   return toRunPlan(cut, spec.pressurePa, spec.plates).windows;
+}
+
+/**
+ * Where the planner expects each component's (and azeotrope's) plateau for a corpus run's
+ * charge at its pressure (what the app's plan carries to the watcher).
+ */
+export function expectedPlateausFor(spec: CorpusRunSpec): ExpectedPlateau[] {
+  const compounds = spec.components.map((c) => findCompound(c.name));
+  const { model } = preferredColumnEquilibrium(compounds);
+  return expectedPlateaus(compounds, spec.pressurePa, model, findAzeotropes(compounds, spec.pressurePa, model))
+    .map((p) => ({ label: p.label, fromC: p.fromTK - 273.15, toC: p.toTK - 273.15 }));
 }
 
 function planFor(spec: CorpusRunSpec): SimulationPlan {

@@ -1,4 +1,4 @@
-import { RunWatcher as Detector, type CutWindow, type WatcherOptions } from '../signal/index.ts';
+import { RunWatcher as Detector, type CutWindow, type ExpectedPlateau, type WatcherOptions } from '../signal/index.ts';
 import type { AlarmSettingsRecord } from '../run/index.ts';
 import type { RunWatcher, WatcherEvent } from './types.ts';
 
@@ -8,6 +8,15 @@ export function planCutWindows(plan: unknown): CutWindow[] {
   if (!Array.isArray(windows)) return [];
   return windows.filter(
     (w): w is CutWindow => typeof w === 'object' && w !== null && Number.isFinite(w.receiver) && Number.isFinite(w.fromC) && Number.isFinite(w.toC),
+  );
+}
+
+/** Where the plan expects each component's plateau (`plan.expectedPlateaus`), or nowhere. */
+export function planExpectedPlateaus(plan: unknown): ExpectedPlateau[] {
+  const plateaus = (plan as { expectedPlateaus?: unknown } | null)?.expectedPlateaus;
+  if (!Array.isArray(plateaus)) return [];
+  return plateaus.filter(
+    (p): p is ExpectedPlateau => typeof p === 'object' && p !== null && typeof p.label === 'string' && Number.isFinite(p.fromC) && Number.isFinite(p.toC) && p.toC >= p.fromC,
   );
 }
 
@@ -28,7 +37,7 @@ export function watcherOptionsFor(settings: AlarmSettingsRecord): Partial<Watche
 /** The signal layer's detector behind the live run's watcher interface; its state saves as JSON text. */
 export function createSignalWatcher(plan: unknown, saved?: unknown, settings?: AlarmSettingsRecord): RunWatcher {
   const detector =
-    typeof saved === 'string' ? Detector.restore(saved) : new Detector(settings ? watcherOptionsFor(settings) : {}, planCutWindows(plan));
+    typeof saved === 'string' ? Detector.restore(saved) : new Detector(settings ? watcherOptionsFor(settings) : {}, { plan: planCutWindows(plan), expectedPlateaus: planExpectedPlateaus(plan) });
   return {
     push(timeS, headC) {
       return detector.push(timeS, headC).map(

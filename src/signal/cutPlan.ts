@@ -1,4 +1,4 @@
-import type { CutWindow } from './types.ts';
+import type { CutWindow, ExpectedPlateau } from './types.ts';
 
 /**
  * A cut plan checked and sorted by temperature. Windows must be finite, fromC < toC, with
@@ -17,6 +17,17 @@ export function normaliseCutPlan(windows: readonly CutWindow[]): CutWindow[] {
   }
   if (new Set(plan.map((w) => w.receiver)).size !== plan.length) throw new RangeError('each receiver may have only one cut window');
   return plan;
+}
+
+/** Expected plateaus checked (finite, fromC <= toC, a label) and sorted by temperature. */
+export function normaliseExpectedPlateaus(plateaus: readonly ExpectedPlateau[]): ExpectedPlateau[] {
+  const checked = plateaus.map((p, i) => {
+    if (!Number.isFinite(p.fromC) || !Number.isFinite(p.toC) || !(p.toC >= p.fromC)) {
+      throw new RangeError(`expected plateau ${i + 1}: from and to must be finite degC, from <= to`);
+    }
+    return { label: String(p.label), fromC: p.fromC, toC: p.toC };
+  });
+  return checked.sort((a, b) => a.fromC - b.fromC);
 }
 
 /** Index of the window holding `headC`, else of the nearest window below it, else 0. */

@@ -1,5 +1,5 @@
 import { figuresFor, type Figures } from '../science/units/figures.ts';
-import type { EventKind, FaultReason, StallReason } from './types.ts';
+import type { EventKind, FaultReason, PlateauReason, StallReason } from './types.ts';
 
 /**
  * What an alarm is about, for the alarm book and its screen (the app's run/alarmBook.ts uses
@@ -29,7 +29,7 @@ const DRY_POT = `If the pot is nearly dry, stop heating: never distil to dryness
  * plateau), when a plan or the app knows it; temperatures on the reader's scale (`figures`,
  * degC by default).
  */
-export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallReason | FaultReason, receiver?: number, figures: Figures = figuresFor()): EventWording {
+export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallReason | FaultReason | PlateauReason, receiver?: number, figures: Figures = figuresFor()): EventWording {
   const degrees = (c: number): string => (Number.isFinite(c) ? ` at ${figures.temperature(c)}` : '');
   const to = receiver === undefined ? 'the next receiver' : `receiver ${receiver}`;
   switch (kind) {
@@ -40,6 +40,13 @@ export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallRea
         action: receiver === undefined ? 'Set the rate to about a drop a second' : `Collect in receiver ${receiver}, about a drop a second`,
       };
     case 'plateau':
+      if (reason === 'mixed') {
+        return {
+          category: null,
+          message: `Steady${degrees(headC)}, between the boiling points of the charge: a mixed fraction`,
+          action: receiver === undefined ? 'Keep it apart from the main cuts' : `Keep collecting in receiver ${receiver}, apart from the main cuts`,
+        };
+      }
       return {
         category: null,
         message: `Steady${degrees(headC)}`,

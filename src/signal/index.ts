@@ -2,9 +2,9 @@
 export { RunWatcher } from './runWatcher.ts';
 export { analyzeReadings } from './analyzeReadings.ts';
 export { resolveWatcherOptions, defaultWatcherOptions, type WatcherOptions } from './watcherOptions.ts';
-export { normaliseCutPlan } from './cutPlan.ts';
-export { parseCutPlan } from './parseCutPlan.ts';
+export { normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
+export { parseCutPlan, parseWatchContext } from './parseCutPlan.ts';
 export { cusumThresholdForMeanTime, cusumMeanTimeToFalseAlarmS } from './cusumThreshold.ts';
 export { wordWatchEvent, sensorSilentWording, isAlarmKind, type AlarmCategory, type EventWording } from './eventWording.ts';
 export type { WatcherState } from './watcherState.ts';
-export type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchEvent, WatchState } from './types.ts';
+export type { CutWindow, EventKind, ExpectedPlateau, FaultReason, InvalidReason, PlateauReason, StallReason, WatchContext, WatchEvent, WatchState } from './types.ts';

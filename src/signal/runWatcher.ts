@@ -1,11 +1,11 @@
 import { isAlarmKind, wordWatchEvent } from './eventWording.ts';
-import { normaliseCutPlan } from './cutPlan.ts';
+import { normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
 import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
 import { onAcceptedReading } from './stateMachine.ts';
 import { spikeFilterPush, spikeFilterReset } from './spikeFilter.ts';
 import { createStuckReadings, pushStuckReading } from './stuckReading.ts';
 import { watcherStateFromJson, watcherStateToJson } from './stateJson.ts';
-import type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchEvent, WatchState } from './types.ts';
+import type { CutWindow, EventKind, FaultReason, InvalidReason, PlateauReason, StallReason, WatchContext, WatchEvent, WatchState } from './types.ts';
 import { resolveWatcherOptions, type WatcherOptions } from './watcherOptions.ts';
 import { createWatcherState, type WatcherState } from './watcherState.ts';
 
@@ -29,8 +29,10 @@ export class RunWatcher {
   private events: WatchEvent[] = [];
   private readonly onRelease = (timeS: number, valueC: number): void => this.accept(timeS, valueC);
 
-  constructor(options: Partial<WatcherOptions> = {}, plan: readonly CutWindow[] = [], state?: WatcherState) {
-    this.s = state ?? createWatcherState(resolveWatcherOptions(options), normaliseCutPlan(plan));
+  /** `context`: the run's cut plan (a list of windows), or the plan and the expected plateaus. */
+  constructor(options: Partial<WatcherOptions> = {}, context: readonly CutWindow[] | WatchContext = [], state?: WatcherState) {
+    const { plan = [], expectedPlateaus = [] } = Array.isArray(context) ? { plan: context as readonly CutWindow[] } : (context as WatchContext);
+    this.s = state ?? createWatcherState(resolveWatcherOptions(options), normaliseCutPlan(plan), normaliseExpectedPlateaus(expectedPlateaus));
   }
 
   /** Resumes a watcher from `save()` output. */
@@ -197,7 +199,7 @@ export class RunWatcher {
    * Raises an event. Alarms of one kind closer than `minAlarmGapS` are suppressed so no alarm
    * can chatter whatever the state machine does. Returns whether it was raised.
    */
-  emit(timeS: number, kind: EventKind, headC: number, reason?: StallReason | FaultReason, receiver?: number): boolean {
+  emit(timeS: number, kind: EventKind, headC: number, reason?: StallReason | FaultReason | PlateauReason, receiver?: number): boolean {
     const s = this.s;
     const isAlarm = isAlarmKind(kind);
     if (isAlarm) {

@@ -1,12 +1,12 @@
 import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
 import { windowIndexAt } from './cutPlan.ts';
 import { createEwRegression, ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression, type EwRegression } from './ewRegression.ts';
-import type { EventKind, FaultReason, StallReason, WatchState } from './types.ts';
+import type { EventKind, FaultReason, PlateauReason, StallReason, WatchState } from './types.ts';
 import type { WatcherState } from './watcherState.ts';
 
 /** Where the state machine raises events and changes state (the watcher). */
 export interface EventSink {
-  emit(timeS: number, kind: EventKind, headC: number, reason?: StallReason | FaultReason, receiver?: number): boolean;
+  emit(timeS: number, kind: EventKind, headC: number, reason?: StallReason | FaultReason | PlateauReason, receiver?: number): boolean;
   setState(state: WatchState, timeS: number): void;
 }
 
@@ -165,7 +165,25 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
     s.receiverIndex = Math.max(s.receiverIndex, windowIndexAt(s.plan, levelC));
     receiver = s.plan[s.receiverIndex]?.receiver;
   }
-  sink.emit(timeS, 'plateau', levelC, undefined, receiver);
+  sink.emit(timeS, 'plateau', levelC, isMixedLevel(s, levelC) ? 'mixed' : undefined, receiver);
+}
+
+/** A level outside every expected plateau of the charge (none known: never). */
+function isMixedLevel(s: WatcherState, levelC: number): boolean {
+  const expected = s.expectedPlateaus ?? [];
+  return expected.length > 0 && !expected.some((p) => levelC >= p.fromC && levelC <= p.toC);
+}
+
+/**
+ * A level only the charge's last plateau (the one reaching highest) can have: nothing heavier is
+ * to come, so a rise off it is the head still settling onto that component, or the pot running
+ * low (the falling-away stall's business), not a cut.
+ */
+function isLastLevel(s: WatcherState, levelC: number): boolean {
+  const expected = s.expectedPlateaus ?? [];
+  if (expected.length < 2) return false;
+  const last = expected.reduce((a, b) => (b.toC > a.toC ? b : a));
+  return levelC >= last.fromC && levelC <= last.toC && !expected.some((p) => p !== last && levelC >= p.fromC && levelC <= p.toC);
 }
 
 function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: number, fastC: number, sink: EventSink): void {
@@ -211,6 +229,13 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
     s.fallSinceS = NaN;
     const isPause = s.levelC < (s.brokeFromC ?? NaN) + PAUSE_C && timeS - s.stateSinceS < PAUSE_S;
     if (isPause) s.brokeFromC = s.levelC;
+    // A mixed stretch (its level as it stands now, refined since it was entered) ends with no
+    // component's cut: the head climbs on to the next component's plateau, whose end is the cut.
+    // Off the last component's plateau there is no next receiver to change to.
+    if (isMixedLevel(s, s.levelC) || isLastLevel(s, s.levelC)) {
+      sink.setState('leaving', timeS);
+      return;
+    }
     if (s.isShoulder || isPause) {
       // Still the climb the last alarm announced: carry on rising without a second alarm.
       sink.setState('leaving', timeS);

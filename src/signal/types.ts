@@ -5,6 +5,8 @@ export type EventKind = 'vapour' | 'plateau' | 'breakthrough' | 'stall' | 'senso
 export type WatchState = 'cold' | 'rising' | 'plateau' | 'leaving' | 'stalled' | 'fault';
 
 export type StallReason = 'no-vapour' | 'falling-away' | 'creeping';
+/** A plateau outside every expected plateau of the charge: a mixed stretch. */
+export type PlateauReason = 'mixed';
 export type FaultReason = 'no-valid-readings' | 'open-thermocouple' | 'erratic' | 'stuck';
 
 /** Why a reading carries no valid temperature: passed in, or found by the watcher. */
@@ -15,6 +17,22 @@ export interface CutWindow {
   receiver: number;
   fromC: number;
   toC: number;
+}
+
+/**
+ * Where the head may hold while one component of the charge (or an azeotrope) comes over, from
+ * the science core's planner. Units: degC.
+ */
+export interface ExpectedPlateau {
+  label: string;
+  fromC: number;
+  toC: number;
+}
+
+/** What the watcher may be told about a run: its cut plan, and where plateaus can lie. */
+export interface WatchContext {
+  plan?: readonly CutWindow[];
+  expectedPlateaus?: readonly ExpectedPlateau[];
 }
 
 export interface WatchEvent {
@@ -29,7 +47,7 @@ export interface WatchEvent {
   message: string;
   /** What to do, in a few words (every alarm names its action). */
   action: string;
-  reason?: StallReason | FaultReason;
+  reason?: StallReason | FaultReason | PlateauReason;
   /** With a plan: the receiver to change to (breakthrough, cut) or the one collecting (plateau). */
   receiver?: number;
 }

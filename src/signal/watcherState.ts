@@ -1,7 +1,7 @@
 import { createEwRegression, type EwRegression } from './ewRegression.ts';
 import { createSpikeFilter, type SpikeFilter } from './spikeFilter.ts';
 import { createStuckReadings, type StuckReadings } from './stuckReading.ts';
-import type { CutWindow, EventKind, FaultReason, InvalidReason, StallReason, WatchState } from './types.ts';
+import type { CutWindow, EventKind, ExpectedPlateau, FaultReason, InvalidReason, StallReason, WatchState } from './types.ts';
 import type { WatcherOptions } from './watcherOptions.ts';
 
 /** Everything the watcher knows: plain data, so it saves as JSON and restores exactly. */
@@ -9,6 +9,9 @@ export interface WatcherState {
   version: 1;
   options: WatcherOptions;
   plan: CutWindow[];
+  /** Where the charge's plateaus can lie; none known: every plateau may be a component's.
+   * Absent in states saved before it existed. */
+  expectedPlateaus?: ExpectedPlateau[];
   state: WatchState;
   stateSinceS: number;
   stallReason: StallReason | null;
@@ -59,9 +62,9 @@ export interface WatcherState {
   lastAlarmS: Partial<Record<EventKind, number>>;
 }
 
-export function createWatcherState(options: WatcherOptions, plan: CutWindow[]): WatcherState {
+export function createWatcherState(options: WatcherOptions, plan: CutWindow[], expectedPlateaus: ExpectedPlateau[] = []): WatcherState {
   return {
-    version: 1, options, plan,
+    version: 1, options, plan, expectedPlateaus,
     state: 'cold', stateSinceS: NaN, stallReason: null, faultReason: null, preFaultState: 'cold',
     firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
     intervalS: NaN, recoverCount: 0,

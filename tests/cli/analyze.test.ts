@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../src/cli/commands/analyze.ts';
+import { plan as planCommand } from '../../src/cli/commands/plan.ts';
 import { UsageError, type CommandIo } from '../../src/cli/command.ts';
 import { writeTraceCsv } from '../../src/run/traceCsv.ts';
 import { sensorReadings } from '../../src/science/sensorModel/index.ts';
@@ -59,6 +60,24 @@ describe('analyze', () => {
     const events = io.outLines.map((l) => JSON.parse(l) as { event: string; receiver?: number });
     expect(events.map((e) => `${e.event}:${e.receiver}`)).toEqual(['vapour:1', 'plateau:1', 'breakthrough:2', 'cut:3', 'plateau:3']);
   });
+  it('analyze --plan reads cutbell plan --json output: a steady head between the boiling points is a mixed fraction', async () => {
+    // Demo run (invented) of hexane and toluene (CRC Handbook 95th ed.: 68.7 and 110.6 degC) on
+    // a short column: the head holds at 88 degC between the two for ten minutes.
+    const mixed = syntheticTruth({
+      roomC: 20, vapourArrivalS: 400, arrivalTauS: 8,
+      plateaus: [{ levelC: 68.5, durationS: 1200, riseS: 200 }, { levelC: 88, durationS: 600, riseS: 200 }, { levelC: 110.4, durationS: 1200 }],
+    });
+    const r = sensorReadings(mixed.timeS, mixed.headC, { seed: 3, intervalS: 1, noiseSdC: 0.1 });
+    const planIo = fakeIo({});
+    expect(await planCommand.run(['--mix', 'hexane:0.4,toluene:0.6', '--charge', '60mL', '--pressure', '101.325kPa', '--plates', '2', '--json'], planIo)).toBe(0);
+    const io = fakeIo({ 'run.csv': writeTraceCsv({ timeS: r.timeS, headC: r.headC }), 'plan.json': planIo.outLines.join('\n') });
+    expect(await analyze.run(['run.csv', '--plan', 'plan.json', '--json'], io)).toBe(0);
+    const events = io.outLines.map((l) => JSON.parse(l) as { event: string; reason?: string; head_c: number });
+    const plateaus = events.filter((e) => e.event === 'plateau');
+    expect(plateaus.map((e) => e.reason ?? 'component')).toEqual(['component', 'mixed', 'component']);
+    expect(events.filter((e) => e.event === 'breakthrough')).toHaveLength(1);
+  });
+
   it('analyze fails with a usage error for no files or a bad plan', async () => {
     await expect(analyze.run([], fakeIo({}))).rejects.toThrow(UsageError);
     await expect(analyze.run(['run.csv', '--plan', 'p.json'], fakeIo({ 'run.csv': goodCsv, 'p.json': '{"cuts": [{"receiver": 1}]}' }))).rejects.toThrow(/from_c/);

@@ -59,3 +59,25 @@ describe('the chemist\'s alarm thresholds reach the run watcher', () => {
     expect(firstOf(events, 'stall')?.reason).toBe('no-vapour');
   });
 });
+
+describe('the plan\'s expected plateaus reach the run watcher', () => {
+  // The same shaped demo trace: its 77 degC plateau, then the climb.
+  function feedWith(plan: unknown): WatcherEvent[] {
+    const watcher = createSignalWatcher(plan);
+    const events: WatcherEvent[] = [];
+    for (let t = 0; t <= 2400; t++) events.push(...watcher.push(t, t < 300 ? 22 : t < 400 ? 22 + (55 * (t - 300)) / 100 : t < 1300 ? 77 : 77 + 0.05 * (t - 1300)));
+    return events;
+  }
+
+  it('a plateau inside the plan\'s expected plateaus is a component: its end is a breakthrough', () => {
+    const events = feedWith({ windows: [], expectedPlateaus: [{ label: 'ethyl acetate', fromC: 74, toC: 80 }, { label: 'toluene', fromC: 105, toC: 112 }] });
+    expect(firstOf(events, 'plateau')?.reason).toBeUndefined();
+    expect(firstOf(events, 'breakthrough')).toBeDefined();
+  });
+
+  it('a plateau outside them is a mixed fraction, with no breakthrough; a malformed entry is ignored', () => {
+    const events = feedWith({ windows: [], expectedPlateaus: [{ label: 'a', fromC: 60, toC: 70 }, { label: 'b', fromC: 100, toC: 110 }, { label: 'bad', fromC: 'x' }] });
+    expect(firstOf(events, 'plateau')?.reason).toBe('mixed');
+    expect(firstOf(events, 'breakthrough')).toBeUndefined();
+  });
+});

@@ -1,6 +1,6 @@
 import { parseTraceCsv, TraceCsvError } from '../../run/traceCsv.ts';
-import { analyzeReadings, type CutWindow, type WatchEvent } from '../../signal/index.ts';
-import { readPlanFile } from '../readPlanFile.ts';
+import { analyzeReadings, type WatchContext, type WatchEvent } from '../../signal/index.ts';
+import { readWatchContextFile } from '../readPlanFile.ts';
 import { parseArgs } from '../args.ts';
 import { UsageError, type Command, type CommandIo } from '../command.ts';
 
@@ -12,7 +12,11 @@ plateau (with its level), breakthrough, stall, sensor-fault, and with a plan, cu
   <trace.csv>      header line with columns time_s (s since heat on) and head_c (degC);
                    other columns are ignored; an empty head_c is no valid reading
   --plan FILE      cut plan, JSON: {"cuts": [{"receiver": 1, "from_c": 55, "to_c": 58.5}, ...]}
-                   ("windows" is accepted for "cuts"); events then name the next receiver
+                   ("windows" is accepted for "cuts", and the output of cutbell plan --json);
+                   events then name the next receiver. With the plan's "expected_plateaus"
+                   ({"label", "from_c", "to_c"}: where each component's plateau can lie) a
+                   steady head outside them all is a mixed fraction: plateau, reason mixed,
+                   and no breakthrough off it
   --json           one JSON object per event and line:
                    {"file","time_s","event","head_c","alarm","message","action","reason","receiver"}
 
@@ -29,7 +33,7 @@ export const analyze: Command = {
     const parsed = parseArgs(args, { values: ['plan'], flags: ['json'] });
     if (parsed.positional.length === 0) throw new UsageError('give at least one trace CSV file (see --help)');
     const planPath = parsed.options.get('plan');
-    const plan = planPath === undefined ? [] : await readPlanFile(planPath, io);
+    const plan: WatchContext = planPath === undefined ? {} : await readWatchContextFile(planPath, io);
     const isJson = parsed.options.has('json');
     if (!isJson) io.out(tableRow(['file', 'time', 'event', 'head_c', 'receiver', 'alert']));
     let failures = 0;
@@ -45,7 +49,7 @@ export const analyze: Command = {
   },
 };
 
-async function analyzeFile(file: string, plan: CutWindow[], io: CommandIo): Promise<WatchEvent[] | null> {
+async function analyzeFile(file: string, plan: WatchContext, io: CommandIo): Promise<WatchEvent[] | null> {
   let text: string;
   try {
     text = await io.readFile(file);

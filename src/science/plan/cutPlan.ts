@@ -5,6 +5,7 @@ import { prepareMixture } from '../vle/prepareMixture.ts';
 import { relativeVolatility } from '../vle/relativeVolatility.ts';
 import type { ThermoModel } from '../vle/thermoModel.ts';
 import { adviseDistillation, type Advice } from './advice.ts';
+import { expectedPlateaus, type ExpectedPlateau } from './expectedPlateaus.ts';
 import { fenskeMinimumStages } from './fenske.ts';
 import { simulateTotalReflux } from './simulateTotalReflux.ts';
 
@@ -48,6 +49,8 @@ export interface CutPlan {
   /** Fenske minimum stages for 95 % each way, per adjacent pair. */
   minimumStages: number[];
   azeotropes: PairAzeotropes[];
+  /** Where a plateau of each component (or azeotrope) can lie, for the run watcher. */
+  expectedPlateaus: ExpectedPlateau[];
   advice: Advice[];
   isEstimated: boolean;
 }
@@ -135,6 +138,7 @@ export function planCuts(input: CutPlanInput): CutPlan {
     relativeVolatilities,
     minimumStages,
     azeotropes,
+    expectedPlateaus: expectedPlateaus(compounds, pPa, model, azeotropes),
     advice: adviseDistillation(boiling, azeotropes, plates, minimumStages, input.heatSourceMaxK),
     isEstimated: mixture.isEstimated,
   };

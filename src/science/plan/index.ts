@@ -7,3 +7,5 @@ export { adviseDistillation } from './advice.ts';
 export type { Advice, BoilingAtLab } from './advice.ts';
 export { planCuts } from './cutPlan.ts';
 export type { CutPlan, CutPlanInput, PlannedFraction } from './cutPlan.ts';
+export { expectedPlateaus } from './expectedPlateaus.ts';
+export type { ExpectedPlateau } from './expectedPlateaus.ts';

@@ -1,0 +1,49 @@
+import type { Compound } from '../compounds/compound.ts';
+import { tSatK } from '../compounds/vapourPressure.ts';
+import { dewT } from '../vle/equilibrium.ts';
+import type { PairAzeotropes } from '../vle/findAzeotropes.ts';
+import type { ThermoModel } from '../vle/thermoModel.ts';
+
+/** Where the head temperature may hold while one component, or an azeotrope, comes over. */
+export interface ExpectedPlateau {
+  /** The compound, or "a + b azeotrope". */
+  label: string;
+  /** Units: K */
+  fromTK: number;
+  toTK: number;
+}
+
+/** Top vapour still counted as one component (the run watcher's benchmark truth: 90 %). */
+const PURITY = 0.9;
+/** A thermometer bulb set a little high, or a draught, reads a degree or two low (common
+ * practice); and a plateau's level is told within 1.5 degC (the benchmark's plateau rule). */
+const BELOW_K = 2.5;
+const ABOVE_K = 1.5;
+
+/**
+ * The head temperatures a plateau of each component can have at the lab's pressure: the dew
+ * points of its vapour with a tenth of any lighter component (the lowest) to those with a tenth of
+ * any heavier one (the highest), the pure boiling point for none, widened for the thermometer; each
+ * azeotrope of a pair is a plateau of its own about its temperature. A steady head outside all of
+ * them is a mixed stretch: no component is coming over nearly pure.
+ */
+export function expectedPlateaus(compounds: readonly Compound[], pPa: number, model: ThermoModel, azeotropes: readonly PairAzeotropes[]): ExpectedPlateau[] {
+  if (!(pPa > 0)) throw new RangeError(`pressure must be > 0 Pa (got ${pPa})`);
+  const order = compounds.map((c, i) => ({ c, i, tK: tSatK(c, pPa).tK })).sort((a, b) => a.tK - b.tK);
+  const withTenthOf = (main: number, other: number): number => {
+    const y = compounds.map(() => 0);
+    y[order[main]!.i] = PURITY;
+    y[order[other]!.i] = 1 - PURITY;
+    return dewT(compounds, y, pPa, model).tK;
+  };
+  const bands: ExpectedPlateau[] = order.map((o, k) => {
+    const dews = order.map((_, j) => (j === k ? o.tK : withTenthOf(k, j)));
+    return { label: o.c.name, fromTK: Math.min(...dews) - BELOW_K, toTK: Math.max(...dews) + ABOVE_K };
+  });
+  for (const pair of azeotropes) {
+    for (const azeotrope of pair.azeotropes) {
+      bands.push({ label: `${pair.pair[0]} + ${pair.pair[1]} azeotrope`, fromTK: azeotrope.tK - BELOW_K, toTK: azeotrope.tK + ABOVE_K });
+    }
+  }
+  return bands;
+}

@@ -1,0 +1,80 @@
+import { describe, expect, it } from 'vitest';
+import { sensorReadings } from '../../src/science/sensorModel/index.ts';
+import { analyzeReadings, parseWatchContext, RunWatcher, type ExpectedPlateau, type WatchEvent } from '../../src/signal/index.ts';
+import { syntheticTruth, type SyntheticProfile } from '../support/syntheticTruth.ts';
+
+// Demo scenarios (invented numbers): a light component near 69 degC, a heavy one near 110 degC.
+const bands: ExpectedPlateau[] = [{ label: 'light', fromC: 66, toC: 75 }, { label: 'heavy', fromC: 105, toC: 116 }];
+
+function readings(profile: SyntheticProfile, seed = 5): { timeS: Float64Array; headC: Float64Array } {
+  const truth = syntheticTruth(profile);
+  const r = sensorReadings(truth.timeS, truth.headC, { seed, intervalS: 1, noiseSdC: 0.1 });
+  return { timeS: r.timeS, headC: r.headC };
+}
+const alarms = (events: WatchEvent[]): string[] => events.filter((e) => e.isAlarm).map((e) => `${e.kind}${e.receiver === undefined ? '' : `:${e.receiver}`}`);
+
+describe('RunWatcher told where the charge\'s plateaus lie', () => {
+  // A few-plate column: the head holds at 88 degC for ten minutes between the two components.
+  const withMixedStretch = readings({
+    roomC: 20, vapourArrivalS: 400, arrivalTauS: 8,
+    plateaus: [{ levelC: 69, durationS: 1200, riseS: 200 }, { levelC: 88, durationS: 600, riseS: 200 }, { levelC: 110, durationS: 1200 }],
+  });
+
+  it('without them every plateau\'s end is a breakthrough, the mixed stretch\'s too', () => {
+    const events = analyzeReadings(withMixedStretch.timeS, withMixedStretch.headC);
+    expect(alarms(events)).toEqual(['vapour', 'breakthrough', 'breakthrough']);
+  });
+
+  it('with them a plateau between the bands is a mixed fraction: shown, and its end raises nothing', () => {
+    const events = analyzeReadings(withMixedStretch.timeS, withMixedStretch.headC, { expectedPlateaus: bands });
+    expect(alarms(events)).toEqual(['vapour', 'breakthrough']);
+    const plateaus = events.filter((e) => e.kind === 'plateau');
+    expect(plateaus.map((p) => p.reason ?? 'component')).toEqual(['component', 'mixed', 'component']);
+    expect(plateaus[1]!.message).toMatch(/a mixed fraction/);
+    expect(plateaus[1]!.isAlarm).toBe(false);
+  });
+
+  it('a rise off the last component\'s plateau is no cut: nothing heavier is to come', () => {
+    // The head holds at 107 for a few minutes, then settles 4 degC higher (still the heavy one).
+    const settling = readings({
+      roomC: 20, vapourArrivalS: 400, arrivalTauS: 8,
+      plateaus: [{ levelC: 69, durationS: 1200, riseS: 200 }, { levelC: 107, durationS: 500, riseS: 120 }, { levelC: 111, durationS: 1200 }],
+    });
+    expect(alarms(analyzeReadings(settling.timeS, settling.headC))).toEqual(['vapour', 'breakthrough', 'breakthrough']);
+    expect(alarms(analyzeReadings(settling.timeS, settling.headC, { expectedPlateaus: bands }))).toEqual(['vapour', 'breakthrough']);
+  });
+
+  it('resumes from a saved state with the bands it was given', () => {
+    const { timeS, headC } = withMixedStretch;
+    const whole = analyzeReadings(timeS, headC, { expectedPlateaus: bands });
+    const first = new RunWatcher({}, { expectedPlateaus: bands });
+    const events: WatchEvent[] = [];
+    const half = timeS.findIndex((t) => t >= 1900);
+    for (let i = 0; i < half; i++) events.push(...first.push(timeS[i]!, headC[i]!));
+    const resumed = RunWatcher.restore(first.save());
+    for (let i = half; i < timeS.length; i++) events.push(...resumed.push(timeS[i]!, headC[i]!));
+    expect(events).toEqual(whole);
+  });
+
+  it('refuses a band that ends below its start, with the reason', () => {
+    expect(() => new RunWatcher({}, { expectedPlateaus: [{ label: 'x', fromC: 80, toC: 70 }] })).toThrow(/expected plateau 1: .*from <= to/);
+  });
+});
+
+describe('parseWatchContext', () => {
+  it('reads the fractions and expected plateaus that cutbell plan --json prints', () => {
+    const json = JSON.stringify({
+      fractions: [{ receiver: 1, compound: 'n-hexane', from_c: 67.9, to_c: 70.1 }, { receiver: 2, compound: null, from_c: 70.1, to_c: 109.8 }],
+      expected_plateaus: [{ label: 'toluene', from_c: 105.2, to_c: 112.1 }, { label: 'n-hexane', from_c: 66.2, to_c: 75.4 }],
+    });
+    const context = parseWatchContext(json);
+    expect(context.plan.map((w) => w.receiver)).toEqual([1, 2]);
+    expect(context.expectedPlateaus.map((p) => p.label)).toEqual(['n-hexane', 'toluene']);
+  });
+
+  it('takes a plan with no expected plateaus, and names what is wrong with a bad one', () => {
+    expect(parseWatchContext('{"cuts": []}').expectedPlateaus).toEqual([]);
+    expect(() => parseWatchContext('{"cuts": [], "expected_plateaus": [{"label": "a", "from_c": "60"}]}')).toThrow(/expected plateau 1: needs a label and numbers/);
+    expect(() => parseWatchContext('{"cuts": [], "expected_plateaus": 5}')).toThrow(/must be an array/);
+  });
+});
