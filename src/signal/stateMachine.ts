@@ -88,8 +88,24 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
     case 'fault':
       break;
   }
-  if (s.plan.length > 0 && s.receiverIndex >= 0 && (s.state === 'rising' || s.state === 'leaving' || s.state === 'plateau')) {
-    watchPlannedCut(s, timeS, fastC, sink);
+  // A planned cut is the head climbing through a window's top: between plateaus, or off a
+  // plateau once the head is a breakthrough's rise above it (a window top under a steady head is
+  // the plan missing the plateau the head found, not a cut; off a plateau the cut is that
+  // plateau's breakthrough). Before the first plateau the head must have spent a plateau's hold
+  // in the window first: vapour arriving passes through the first window in seconds, and a
+  // first plateau that settles just above its window is still the first component.
+  if (s.plan.length > 0 && s.receiverIndex >= 0) {
+    // The lesser of the fast fit and the reading, as for the peak (watchRising): the fit
+    // overshoots where a steep climb stops, by degrees, for seconds.
+    const headC = Math.min(fastC, valueC);
+    const window = s.plan[s.receiverIndex];
+    if (window && headC < window.fromC) s.windowDwellS = 0;
+    else if (window && headC < window.toC + CUT_MARGIN_C) s.windowDwellS = (s.windowDwellS ?? 0) + dtS;
+    const hasSettled = Number.isFinite(s.levelC) || (s.windowDwellS ?? 0) >= Math.max(s.options.plateauHoldS, s.intervalS);
+    const isClimbing = (s.state === 'rising' || s.state === 'leaving') && hasSettled;
+    const isRisingOff = s.state === 'plateau' && headC - s.levelC >= s.options.breakthroughMinRiseC;
+    if (isClimbing || isRisingOff) watchPlannedCut(s, timeS, headC, sink);
+    else s.cutSinceS = NaN;
   }
 }
 
@@ -306,7 +322,16 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
   // Sparse (typed) readings cannot wait for a second one: the crossing itself is the cut.
   if (timeS - s.cutSinceS < (s.intervalS >= CUT_HOLD_S ? 0 : CUT_HOLD_S)) return;
   s.cutSinceS = NaN;
+  s.windowDwellS = 0;
   s.receiverIndex = Math.max(s.receiverIndex + 1, windowIndexAt(s.plan, fastC));
+  if (s.state === 'plateau') {
+    // The plateau's end, announced by the plan: no breakthrough after it for the same rise.
+    s.brokeFromC = s.levelC;
+    s.peakC = fastC;
+    s.plateauCandidateS = NaN;
+    s.fallSinceS = NaN;
+    sink.setState('leaving', timeS);
+  }
   sink.emit(timeS, 'cut', fastC, undefined, s.plan[s.receiverIndex]!.receiver);
 }
 

@@ -59,6 +59,9 @@ export interface WatcherState {
   stuck?: StuckReadings;
   receiverIndex: number;
   cutSinceS: number;
+  /** Time the head has spent in the current receiver's window since it was last below it.
+   * Absent in older saves. Units: s. */
+  windowDwellS?: number;
   lastAlarmS: Partial<Record<EventKind, number>>;
 }
 
@@ -72,6 +75,6 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
   };
 }

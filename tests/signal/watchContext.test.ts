@@ -61,6 +61,39 @@ describe('RunWatcher told where the charge\'s plateaus lie', () => {
   });
 });
 
+describe('RunWatcher with a cut plan', () => {
+  // Vapour arrives in a couple of seconds: the fast fit overshoots the first plateau by degrees.
+  const brisk: SyntheticProfile = {
+    roomC: 20, vapourArrivalS: 400, arrivalTauS: 2,
+    plateaus: [{ levelC: 56, durationS: 1200, riseS: 150 }, { levelC: 99.5, durationS: 1200 }],
+  };
+  const { timeS, headC } = readings(brisk);
+
+  it('raises no planned cut as the vapour arrives, one alarm off the plateau, and the cut into the next window', () => {
+    const plan = [{ receiver: 1, fromC: 54, toC: 57 }, { receiver: 2, fromC: 57, toC: 97 }, { receiver: 3, fromC: 97, toC: 102 }];
+    expect(alarms(analyzeReadings(timeS, headC, plan))).toEqual(['vapour:1', 'breakthrough:2', 'cut:3']);
+  });
+
+  it('one alarm for one rise off a plateau, whether the plan\'s window top or the breakthrough comes first', () => {
+    const slowRise = readings({ ...brisk, plateaus: [{ levelC: 56, durationS: 1200, riseS: 1500 }, { levelC: 99.5, durationS: 1200 }] });
+    // A very long target time between false alarms makes the breakthrough's CUSUM slow, so the
+    // plan's window top comes first.
+    for (const options of [{}, { targetFalseAlarmIntervalH: 1e6 }]) {
+      for (const top of [56.8, 57.2, 58]) {
+        const plan = [{ receiver: 1, fromC: 54, toC: top }, { receiver: 2, fromC: top, toC: 97 }, { receiver: 3, fromC: 97, toC: 102 }];
+        const changes = analyzeReadings(slowRise.timeS, slowRise.headC, plan, options).filter((e) => e.kind === 'breakthrough' || e.kind === 'cut');
+        expect(changes.filter((e) => e.headC < 90).map((e) => e.receiver)).toEqual([2]);
+      }
+    }
+  });
+
+  it('raises no cut while the head holds above a window the plan placed too low: the breakthrough is the cut', () => {
+    const tooLow = [{ receiver: 1, fromC: 50, toC: 55 }, { receiver: 2, fromC: 55, toC: 97 }, { receiver: 3, fromC: 97, toC: 102 }];
+    const events = analyzeReadings(timeS, headC, tooLow);
+    expect(alarms(events).filter((a) => !a.startsWith('vapour'))).toEqual(['breakthrough:3']);
+  });
+});
+
 describe('parseWatchContext', () => {
   it('reads the fractions and expected plateaus that cutbell plan --json prints', () => {
     const json = JSON.stringify({
