@@ -47,6 +47,26 @@ describe('scoreRun', () => {
     const twice = scoreRun(alarms, plateaus, [{ timeS: 420, kind: 'breakthrough', headC: 62 }, { timeS: 430, kind: 'cut', headC: 63 }]);
     expect([twice.hitCount.breakthrough, twice.falseAlarmCount, twice.nuisanceAlarmCount]).toEqual([1, 1, 1]);
   });
+  it('scoreRun lets a planned cut take a cut-in window at the next plateau\'s start (our addition), in no recall', () => {
+    // Two purity intervals: the second begins at 500 s, so its cut-in window is 440-740 s.
+    const truth = { ...handTruth(), purityIntervals: [{ startS: 150, endS: 400, component: 'a' }, { startS: 500, endS: 650, component: 'b' }] };
+    const windows = truthWindows(truth, 1, false);
+    expect(windows.cutIns).toEqual([{ timeS: 500, fromS: 440, toS: 740 }]);
+    const events = [{ timeS: 420, kind: 'breakthrough', headC: 62 }, { timeS: 520, kind: 'cut', headC: 70 }];
+    const issueOnly = scoreRun(windows.alarms, windows.plateaus, events);
+    expect(issueOnly.falseAlarmCount).toBe(1);
+    const withCutIns = scoreRun(windows.alarms, windows.plateaus, events, windows.cutIns);
+    expect([withCutIns.falseAlarmCount, withCutIns.cutInHitCount]).toEqual([0, 1]);
+    expect(withCutIns.truthCount).toEqual(issueOnly.truthCount);
+    expect(withCutIns.hitCount).toEqual(issueOnly.hitCount);
+    // A second cut in the same window is a nuisance (false too).
+    const twice = scoreRun(windows.alarms, windows.plateaus, [...events, { timeS: 515, kind: 'cut', headC: 71 }], windows.cutIns);
+    expect([twice.falseAlarmCount, twice.nuisanceAlarmCount]).toEqual([1, 1]);
+    // A vapour alarm there is no cut: it takes no cut-in window.
+    const stray = scoreRun(windows.alarms, windows.plateaus, [...events, { timeS: 510, kind: 'vapour', headC: 70 }], windows.cutIns);
+    expect(stray.falseAlarmCount).toBe(1);
+  });
+
   it('scoreRun counts a second alarm in a hit window as nuisance and false, and a stray as false', () => {
     const s = scoreRun(alarms, plateaus, [
       { timeS: 425, kind: 'breakthrough', headC: 62 }, { timeS: 470, kind: 'breakthrough', headC: 66 },

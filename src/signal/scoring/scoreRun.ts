@@ -1,4 +1,4 @@
-import type { AlarmWindow, PlateauTruth, ScoredAlarmKind } from './truthWindows.ts';
+import type { AlarmWindow, CutInWindow, PlateauTruth, ScoredAlarmKind } from './truthWindows.ts';
 
 /** What any detector reports, for scoring (the watcher's events, or a peer's). */
 export interface ScoredEvent {
@@ -22,20 +22,25 @@ export interface RunScore {
   nuisanceAlarmCount: number;
   /** Detection delay of each breakthrough hit. Units: s. */
   breakthroughLatencyS: number[];
+  /** Planned cuts that took a cut-in window (given one): counted neither false nor in recall. */
+  cutInHitCount: number;
 }
 
 /**
  * Scores one run: each alarm in time order hits the earliest unmatched truth window of its
  * kind that holds it; an alarm inside only windows already hit is a nuisance alarm (counted
  * false too); an alarm in no window is false. A plateau truth is hit by any plateau event
- * inside its interval with the level within 1.5 degC.
+ * inside its interval with the level within 1.5 degC. A planned cut that hits no alarm window may
+ * take an unhit `cutIns` window instead (our addition, truthWindows); pass none for the issue's
+ * scoring alone.
  */
-export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly PlateauTruth[], events: readonly ScoredEvent[]): RunScore {
+export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly PlateauTruth[], events: readonly ScoredEvent[], cutIns: readonly CutInWindow[] = []): RunScore {
   const zero = (): Record<ScoredAlarmKind, number> => ({ vapour: 0, breakthrough: 0, stall: 0, 'sensor-fault': 0 });
   const score: RunScore = {
     truthCount: zero(), hitCount: zero(), plateauTruthCount: plateaus.length, plateauHitCount: 0,
-    falseAlarmCount: 0, nuisanceAlarmCount: 0, breakthroughLatencyS: [],
+    falseAlarmCount: 0, nuisanceAlarmCount: 0, breakthroughLatencyS: [], cutInHitCount: 0,
   };
+  const isCutInHit = cutIns.map(() => false);
   for (const w of windows) score.truthCount[w.kind]++;
   const isHit = windows.map(() => false);
   const alarms = events.filter((e) => ALARM_KINDS.has(e.kind)).sort((a, b) => a.timeS - b.timeS);
@@ -50,6 +55,15 @@ export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly Pla
         break;
       }
       isInsideHit = true;
+    }
+    if (open < 0 && alarm.kind === 'cut') {
+      const cutIn = cutIns.findIndex((w, i) => !isCutInHit[i] && alarm.timeS >= w.fromS && alarm.timeS <= w.toS);
+      if (cutIn >= 0) {
+        isCutInHit[cutIn] = true;
+        score.cutInHitCount++;
+        continue;
+      }
+      if (cutIns.some((w, i) => isCutInHit[i] && alarm.timeS >= w.fromS && alarm.timeS <= w.toS)) isInsideHit = true;
     }
     if (open >= 0) {
       const w = windows[open]!;

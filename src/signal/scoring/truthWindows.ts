@@ -12,6 +12,17 @@ export interface AlarmWindow {
   toS: number;
 }
 
+/**
+ * Where a planned cut into the next component's main cut counts as a hit (our addition, see
+ * truthWindows). Units: s.
+ */
+export interface CutInWindow {
+  /** The next component's purity interval begins. */
+  timeS: number;
+  fromS: number;
+  toS: number;
+}
+
 export interface PlateauTruth {
   startS: number;
   endS: number;
@@ -31,11 +42,17 @@ export interface PlateauTruth {
  *   600 s and vapour arrival. A climb that never settles (creeping), from 600 s to 2400 s
  *   after it starts: our addition, the issue names the stall but gives it no window;
  * - sensor-fault: the start of the fault, hit within 60 s.
+ * - cut-in (our addition): the issue asks for an alarm at each planned cut, and a plan's cut out
+ *   of an intermediate fraction into the next main cut comes as the next component's plateau
+ *   begins, where the issue's truth has no window. Each purity interval after the first gives
+ *   one, shaped as a breakthrough's, about its start; only a planned `cut` can take it, and it
+ *   counts in no recall (a hit only keeps that cut from counting false).
  * `readingIntervalS` is the median time between readings.
  */
-export function truthWindows(truth: RunTruth, readingIntervalS: number, isHand: boolean): { alarms: AlarmWindow[]; plateaus: PlateauTruth[] } {
+export function truthWindows(truth: RunTruth, readingIntervalS: number, isHand: boolean): { alarms: AlarmWindow[]; plateaus: PlateauTruth[]; cutIns: CutInWindow[] } {
   const alarms: AlarmWindow[] = [];
   const plateaus: PlateauTruth[] = [];
+  const cutIns: CutInWindow[] = [];
   const afterS = isHand ? Math.max(240, 3 * readingIntervalS) : 240;
   for (const interval of truth.purityIntervals) {
     const levelC = medianBetween(truth.timeS, truth.headC, interval.startS, interval.endS);
@@ -44,6 +61,8 @@ export function truthWindows(truth: RunTruth, readingIntervalS: number, isHand: 
     const crossS = firstExceedance(truth.timeS, truth.headC, interval.startS, levelC + 1.0);
     if (!Number.isNaN(crossS)) alarms.push({ kind: 'breakthrough', timeS: crossS, fromS: crossS - 60, toS: crossS + afterS });
   }
+  const starts = truth.purityIntervals.map((p) => p.startS).sort((a, b) => a - b);
+  for (const t of starts.slice(1)) cutIns.push({ timeS: t, fromS: t - 60, toS: t + afterS });
   for (const event of truth.events) {
     const t = event.timeS;
     if (event.kind === 'vapour') alarms.push({ kind: 'vapour', timeS: t, fromS: t - 10, toS: t + 120 });
@@ -53,7 +72,7 @@ export function truthWindows(truth: RunTruth, readingIntervalS: number, isHand: 
     else alarms.push({ kind: 'stall', timeS: t, fromS: t, toS: t + 600 });
   }
   alarms.sort((a, b) => a.fromS - b.fromS);
-  return { alarms, plateaus };
+  return { alarms, plateaus, cutIns };
 }
 
 function medianBetween(timeS: Float64Array, valueC: Float64Array, fromS: number, toS: number): number {
