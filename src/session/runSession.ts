@@ -235,6 +235,12 @@ export class RunSession {
     this.#startTicking();
   }
 
+  /** The run's own sensor-silence limit (its alarm_settings, kept since heat on), else the session's. */
+  #sensorSilenceMs(): number {
+    const recordedS = this.#header.alarm_settings?.sensor_silence_s;
+    return recordedS !== undefined && recordedS > 0 ? recordedS * 1000 : this.#timings.sensorSilenceMs;
+  }
+
   #startTicking(): void {
     if (this.#timer === null) this.#timer = this.#deps.clock.setInterval(() => this.#tick(), this.#timings.tickMs);
   }
@@ -281,7 +287,7 @@ export class RunSession {
   #tick(): void {
     if (this.#isEnded) return;
     const nowMs = this.#deps.wallMs();
-    if (this.#source && nowMs - this.#lastReadingWallMs > (this.#source.silenceLimitMs ?? this.#timings.sensorSilenceMs)) {
+    if (this.#source && nowMs - this.#lastReadingWallMs > (this.#source.silenceLimitMs ?? this.#sensorSilenceMs())) {
       const { kind, message, action } = sensorSilentWording;
       if (this.#alarms.raise(kind, message, action, this.#runTimeS(), nowMs)) this.#changed();
     }

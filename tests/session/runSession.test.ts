@@ -171,6 +171,24 @@ describe('RunSession', () => {
     expect(restored!.header.gaps).toEqual([{ from_s: 3, to_s: 40, reason: 'the app was closed or the phone restarted' }]);
   });
 
+  it('a reopened run keeps the sensor-silence limit it started with, whatever Settings say now', async () => {
+    const store = new MemoryStore();
+    const first = harness(new Map(), store);
+    const settings = { breakthrough_rise_c: 1, fall_away_c: 4, no_vapour_s: 1800, sensor_silence_s: 20 };
+    await RunSession.start(first.deps, { ...run, alarmSettings: settings }, new ManualSource(), { ...defaultTimings, sensorSilenceMs: 20_000 });
+    await first.advance(1000);
+
+    // Reopened with Settings now at 5 s: the run's own 20 s still holds.
+    const second = harness(new Map(), store);
+    const again = new ManualSource();
+    const restored = await RunSession.restore(second.deps, () => again, { ...defaultTimings, sensorSilenceMs: 5000 });
+    again.send([40, 21]);
+    await second.advance(10_000);
+    expect(restored!.standingAlarms()).toHaveLength(0);
+    await second.advance(11_000);
+    expect(restored!.standingAlarms().map((a) => a.kind)).toEqual(['sensor-lost']);
+  });
+
   it('refuses readings whose time goes backwards, and keeps the rest', async () => {
     const h = harness();
     const source = new ManualSource();
