@@ -1,7 +1,7 @@
 // The benchmark corpus: seeded runs with ground truth. The truth source is pluggable so the
 // column simulator can replace the synthetic profiles without touching the scoring.
 import { createRandom, handReadings, sensorReadings, type Random, type SensorOptions } from '../src/science/sensorModel/index.ts';
-import type { RunTruth } from '../src/signal/scoring/index.ts';
+import { truthWindows, type RunTruth } from '../src/signal/scoring/index.ts';
 import { syntheticTruth, type SyntheticPlateau, type SyntheticProfile } from '../tests/support/syntheticTruth.ts';
 
 export interface Component {
@@ -147,10 +147,38 @@ function observe(id: string, spec: CorpusRunSpec, truth: RunTruth, boilingPoints
     options.lostFromS = between(r, quiet.startS + 200, quiet.endS - 500);
     options.lostToS = options.lostFromS + between(r, 90, 240);
     scored = { ...truth, events: [...truth.events, { kind: 'sensor-fault', timeS: options.lostFromS, cause: 'sensor-lost' }] };
+  } else if (fault < 0.2) {
+    // A hung board, on a quiet plateau or while the head climbs at least 6 degC/min out of the
+    // first breakthrough. Its own generator: the corpus's stream (and so every other run) stays
+    // as it was.
+    const rs = createRandom(spec.seed ^ 0x57c4);
+    const climbing = steepClimbS(truth);
+    const onClimb = climbing.length > 0 && (rs.uniform() < 0.5 || !quiet);
+    const fromS = onClimb ? climbing[Math.floor(rs.uniform() * climbing.length)]! : quiet ? between(rs, quiet.startS + 200, quiet.endS - 500) : NaN;
+    if (Number.isFinite(fromS)) {
+      options.stuckFromS = fromS;
+      scored = truncateTruth(truth, fromS);
+      scored.events.push({ kind: 'sensor-fault', timeS: fromS, cause: 'stuck' });
+    }
   }
   const trace = sensorReadings(truth.timeS, truth.headC, options);
   const label = `${intervalS} s, noise ${options.noiseSdC!.toFixed(2)}${quantumC ? ', 0.25 steps' : ''}`;
   return { id, spec, truth: scored, boilingPointsC, timeS: trace.timeS, headC: trace.headC, isHand: false, intervalS, label };
+}
+
+/** Times of the noise-free head climbing at least 0.1 degC/s after the first breakthrough, up to where that climb ends. */
+function steepClimbS(truth: RunTruth): number[] {
+  const climb = truthWindows(truth, 1, false).alarms.find((a) => a.kind === 'breakthrough');
+  if (!climb) return [];
+  const { timeS, headC } = truth;
+  const times: number[] = [];
+  for (let i = 2; i + 2 < timeS.length; i++) {
+    if (timeS[i]! < climb.timeS) continue;
+    const slope = (headC[i + 2]! - headC[i - 2]!) / (timeS[i + 2]! - timeS[i - 2]!);
+    if (slope >= 0.1) times.push(timeS[i]!);
+    else if (times.length > 0) break;
+  }
+  return times;
 }
 
 // Truth after a sensor fault cannot be seen: the scored truth stops there.

@@ -97,6 +97,16 @@ describe('sensorReadings', () => {
     const nan = sensorReadings(flatT, flatH, { seed: 3, intervalS: 1, openFromS: 3000 });
     expect(Number.isNaN(nan.headC[nan.headC.length - 1]!)).toBe(true);
   });
+  it('sensorReadings repeats the value it gave when the board hangs, dropouts and all', () => {
+    const rising = Float64Array.from(flatT, (t) => 20 + 0.05 * t);
+    const r = sensorReadings(flatT, rising, { seed: 5, intervalS: 1, noiseSdC: 0.2, dropoutsPerHour: 30, stuckFromS: 2000 });
+    const at = r.timeS.findIndex((t) => t >= 2000);
+    const frozen = r.headC.subarray(at);
+    expect(frozen.length).toBeGreaterThan(100);
+    expect(new Set(frozen).size).toBe(1);
+    expect(Number.isFinite(frozen[0]!)).toBe(true);
+    expect(Math.abs(frozen[0]! - (20 + 0.05 * 2000))).toBeLessThan(2);
+  });
   it('sensorReadings drops readings in dropouts and lost intervals', () => {
     const r = sensorReadings(flatT, flatH, { seed: 4, intervalS: 1, dropoutsPerHour: 30, lostFromS: 1000, lostToS: 1100 });
     const lost = [...r.timeS].map((t, i) => [t, r.headC[i]!] as const).filter(([t]) => t >= 1000 && t < 1100);

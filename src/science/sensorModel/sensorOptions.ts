@@ -31,6 +31,9 @@ export interface SensorOptions {
   /** Full-scale reading of the board. Units: degC. Default 1023.75, the top of a 12-bit
    * 0.25 degC converter (from memory). */
   fullScaleC?: number;
+  /** The board hangs at this time: every later reading repeats the value it gave then (a frozen
+   * meter or converter), until the end. Units: s. Default: never. */
+  stuckFromS?: number;
   /** Readings are lost (NaN) from this time ... Units: s. */
   lostFromS?: number;
   /** ... to this time. Units: s. */

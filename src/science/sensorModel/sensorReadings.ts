@@ -7,7 +7,7 @@ import type { SensorOptions, SensorTrace } from './sensorOptions.ts';
 /**
  * What a thermocouple board reports for the noise-free head temperature (`truthTimeS`,
  * `truthHeadC`): sampled with jitter, lagged, with draughts, noise, converter steps, spikes,
- * dropouts, a lost sensor and an open thermocouple as the options ask. Deterministic per seed.
+ * dropouts, a lost sensor, a hung board and an open thermocouple as the options ask. Deterministic per seed.
  */
 export function sensorReadings(truthTimeS: Float64Array, truthHeadC: Float64Array, options: SensorOptions): SensorTrace {
   if (truthTimeS.length === 0) throw new RangeError('truth series is empty');
@@ -21,6 +21,7 @@ export function sensorReadings(truthTimeS: Float64Array, truthHeadC: Float64Arra
   const spikeTimesS = addSpikes(timeS, headC, options, random);
   quantise(headC, options.quantumC ?? 0.25);
   addDropouts(timeS, headC, options, random);
+  freeze(timeS, headC, options.stuckFromS);
   const fullScaleC = options.fullScaleC ?? 1023.75;
   for (let i = 0; i < headC.length; i++) {
     const t = timeS[i]!;
@@ -76,6 +77,15 @@ function addDropouts(timeS: Float64Array, headC: Float64Array, options: SensorOp
     while (i < timeS.length && timeS[i]! <= untilS) headC[i++] = NaN;
     t = untilS + exponential(3600 / perHour, random);
   }
+}
+
+// A hung board repeats its last good value: dropouts after the freeze are the same value too.
+function freeze(timeS: Float64Array, headC: Float64Array, fromS: number | undefined): void {
+  if (fromS === undefined) return;
+  let first = timeS.findIndex((t) => t >= fromS);
+  if (first < 0) return;
+  while (first > 0 && Number.isNaN(headC[first]!)) first--;
+  for (let i = first + 1; i < headC.length; i++) headC[i] = headC[first]!;
 }
 
 function quantise(headC: Float64Array, quantumC: number): void {

@@ -24,4 +24,4 @@ export type TruthEvent =
   /** heat-lost and pot-dry: the moment it happens. slow-start: timeS is vapour arrival. creeping:
    * the start of a climb that never settles. */
   | { kind: 'stall'; timeS: number; cause: 'heat-lost' | 'pot-dry' | 'slow-start' | 'creeping' }
-  | { kind: 'sensor-fault'; timeS: number; cause: 'open-thermocouple' | 'sensor-lost' };
+  | { kind: 'sensor-fault'; timeS: number; cause: 'open-thermocouple' | 'sensor-lost' | 'stuck' };
