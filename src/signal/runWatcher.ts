@@ -87,7 +87,8 @@ export class RunWatcher {
     // Typed readings repeat whenever the thermometer does: only an instrument can be stuck.
     if (!isHand) {
       s.stuck ??= createStuckReadings();
-      if (pushStuckReading(s.stuck, timeS, headC, s.state)) {
+      const climbCPerS = ewRegressionSlope(s.fast);
+      if (pushStuckReading(s.stuck, timeS, headC, s.state, climbCPerS)) {
         this.enterFault(timeS, 'stuck', headC);
         return this.events;
       }

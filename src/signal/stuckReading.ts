@@ -8,6 +8,9 @@
  * row have probability at most p^(n-1). The run that is a fault is the n with p^(n-1) below
  * `odds`. Quantised to steps as wide as the noise (whole degrees, a quiet 0.25 degC board),
  * p nears 1 and the test asks for hours: it cannot mistake such a plateau for a fault.
+ * While the head climbs off a plateau, the test is the climb itself: a head rising at r degC/s
+ * steps a reading of resolution q on every q / r seconds, so the same value for as long as eight
+ * such steps (and at least 10 readings and 30 s) is frozen, whatever the noise.
  */
 
 /** What the test keeps between readings (plain data: it saves with the watcher). */
@@ -29,6 +32,9 @@ export interface StuckReadings {
   /** Sum of squared steps between readings in this stretch, and their number. Units: degC^2. */
   stepSquares: number;
   steps: number;
+  /** How fast the head was climbing when the value came (the lesser of the watcher's fast and
+   * slow slopes; NaN: not known). Absent in older saves. Units: degC/s. */
+  climbCPerS?: number;
 }
 
 /** A run this unlikely from noise is a fault (about one false alarm in 10^9 runs). */
@@ -40,9 +46,14 @@ const MIN_READINGS = 10;
 const MIN_SECONDS = 30;
 /** Steps larger than this are changes of course or spikes, not noise. Units: degC. */
 const NOISE_STEP_MAX_C = 1;
+/** A climb the reading must follow: 6 degC/min, a breakthrough under way (a plateau creeps at
+ * under 1 degC/min). Units: degC/s. */
+const CLIMB_MIN_C_PER_S = 0.1;
+/** Resolution steps a climbing head must have moved before its stillness is a fault. */
+const CLIMB_STEPS = 8;
 
 export function createStuckReadings(): StuckReadings {
-  return { state: '', valueC: Number.NaN, sinceS: Number.NaN, count: 0, sigmaC: Number.NaN, quantumC: Number.NaN, changes: 0, stepSquares: 0, steps: 0 };
+  return { state: '', valueC: Number.NaN, sinceS: Number.NaN, count: 0, sigmaC: Number.NaN, quantumC: Number.NaN, changes: 0, stepSquares: 0, steps: 0, climbCPerS: Number.NaN };
 }
 
 // Abramowitz and Stegun 7.1.26 (error below 1.5e-7), enough for a run-length threshold.
@@ -61,14 +72,16 @@ export function stuckRunLength(sigmaC: number, quantumC: number, odds = ODDS): n
 }
 
 /**
- * One valid reading, in watcher state `state`. Only a plateau is judged: the noise is measured
- * on the plateau itself (a climb's steps and its rounding look like noise and would make a quiet
- * plateau look frozen), and a frozen reading there would hide the breakthrough. Returns true
- * once the run is a fault. Readings closer than a second are not counted as independent
- * (boards average, so their noise is correlated over a second or so): the run must also last
- * a second for each reading the test asks for.
+ * One valid reading, in watcher state `state`, with the head's climb rate as the watcher last
+ * saw it (`climbCPerS`). On a plateau the run is judged against the noise, measured on the
+ * plateau itself (a climb's steps and its rounding look like noise and would make a quiet
+ * plateau look frozen), where a frozen reading would hide the breakthrough; while leaving a
+ * plateau, against the climb the value came in. Returns true once the run is a fault. Readings
+ * closer than a second are not counted as independent (boards average, so their noise is
+ * correlated over a second or so): on a plateau the run must also last a second for each
+ * reading the test asks for.
  */
-export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string): boolean {
+export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string, climbCPerS = Number.NaN): boolean {
   if (state !== t.state) {
     t.state = state;
     t.changes = 0;
@@ -88,13 +101,22 @@ export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number
     t.valueC = valueC;
     t.sinceS = timeS;
     t.count = 1;
+    t.climbCPerS = climbCPerS;
     // Successive steps of white noise have variance 2 sigma^2; the identical readings count as steps of 0.
     t.sigmaC = t.steps > 0 ? Math.sqrt(t.stepSquares / t.steps / 2) : Number.NaN;
     return false;
   }
   t.count++;
   t.steps++;
+  const stillS = timeS - t.sinceS;
+  // Leaving a plateau only: vapour arriving lands on the first plateau within seconds, and a
+  // quiet board then repeats one value at once (the climb's last rate says nothing of its end).
+  if (state === 'rising') return false;
+  if (state === 'leaving') {
+    const climb = t.climbCPerS ?? Number.NaN;
+    return climb >= CLIMB_MIN_C_PER_S && t.quantumC > 0 && t.count >= MIN_READINGS && stillS >= MIN_SECONDS && climb * stillS >= CLIMB_STEPS * t.quantumC;
+  }
   if (state !== 'plateau' || t.changes < MIN_CHANGES) return false;
   const needed = stuckRunLength(t.sigmaC, t.quantumC);
-  return t.count >= needed && timeS - t.sinceS >= Math.max(MIN_SECONDS, needed - 1);
+  return t.count >= needed && stillS >= Math.max(MIN_SECONDS, needed - 1);
 }

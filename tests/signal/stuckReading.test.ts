@@ -89,4 +89,37 @@ describe('a reading stuck where it must move', () => {
     const resumed = stuckFaults(run(RunWatcher.restore(first.save()), t, c, cut));
     expect(resumed).toEqual(whole);
   });
+
+  // Shaped demo: a plateau at 77 degC, then from 1500 s a breakthrough that settles on 110 degC
+  // (climbing 0.4 degC/s at first, with an 80 s time constant), read each second on a quiet
+  // 0.25 degC board.
+  function climbingTrace(freezeS: number): { t: number[]; c: number[] } {
+    const random = createRandom(11);
+    const t: number[] = [], c: number[] = [];
+    let frozen = Number.NaN;
+    for (let time = 0; time <= 2400; time++) {
+      const head = time < 1500 ? headAt(time) : 77 + 33 * (1 - Math.exp(-(time - 1500) / 80));
+      let value = Math.round((head + 0.05 * random.normal()) / 0.25) * 0.25;
+      if (time >= freezeS) value = Number.isNaN(frozen) ? (frozen = c[c.length - 1]!) : frozen;
+      t.push(time);
+      c.push(value);
+    }
+    return { t, c };
+  }
+
+  it('a reading frozen while the head climbs off a plateau is a fault within a minute, even on a quiet coarse board', () => {
+    const { t, c } = climbingTrace(1540);
+    const faults = stuckFaults(run(new RunWatcher(), t, c));
+    expect(faults).toHaveLength(1);
+    // 30 s at least (the value frozen is the one read at 1539 s), a minute at most.
+    expect(faults[0]!.timeS).toBeGreaterThanOrEqual(1539 + 30);
+    expect(faults[0]!.timeS).toBeLessThanOrEqual(1540 + 60);
+  });
+
+  it('the same climb settling on the next plateau, where that board repeats one value for minutes, is no fault', () => {
+    const { t, c } = climbingTrace(Infinity);
+    const events = run(new RunWatcher(), t, c);
+    expect(events.some((e) => e.kind === 'breakthrough')).toBe(true);
+    expect(stuckFaults(events)).toHaveLength(0);
+  });
 });
