@@ -6,7 +6,7 @@ import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import {
   APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, expectedPlateaus, preferredColumnEquilibrium, findAzeotropes, findCompound, findPlateaus,
-  heatForBoilup, molesFromAmounts, planCuts, simulateBatchStill, tSatK, type BatchStillRun, type Compound, type ConstantBoilingVapour,
+  molesFromAmounts, planCuts, simulateBenchStill, tSatK, type BatchStillRun, type Compound, type ConstantBoilingVapour,
   type HeatStep,
 } from '../src/science/index.ts';
 import { toRunPlan } from '../src/run/index.ts';
@@ -81,15 +81,10 @@ function simulate(plan: SimulationPlan, spec: CorpusRunSpec, heat: (fullW: numbe
   // Heat set so the heaviest component still comes over at the boil-up: a mantle turned up
   // enough for the whole run, as at the bench, so vapour never stops for want of heat alone.
   const heaviest = plan.compounds.map((c) => tSatK(c, spec.pressurePa).tK).reduce((k, t, i, all) => (t > all[k]! ? i : k), 0);
-  const fullW = heatForBoilup({
-    equilibrium, components, x: plan.compounds.map((_, i) => (i === heaviest ? 1 : 0)), pressurePa: spec.pressurePa, roomK: plan.roomK,
-    boilupM3PerS: (plan.boilupMlPerMin * 1e-6) / 60, potLossWPerK: APPARATUS_DEFAULTS.lossWPerK,
-    columnLossWPerK: APPARATUS_DEFAULTS.wallLossWPerK + APPARATUS_DEFAULTS.headLossWPerK,
-  });
-  return simulateBatchStill({
-    equilibrium, components, chargeMol, pressurePa: spec.pressurePa, roomK: plan.roomK,
-    column: { stages: spec.plates, refluxRatio: plan.refluxRatio }, heat: heat(fullW), durationS, sampleIntervalS: 1,
-  });
+  return simulateBenchStill({
+    equilibrium, components, chargeMol, pressurePa: spec.pressurePa, roomK: plan.roomK, plates: spec.plates, refluxRatio: plan.refluxRatio,
+    boilupMlPerMin: plan.boilupMlPerMin, heatForX: plan.compounds.map((_, i) => (i === heaviest ? 1 : 0)), heat, durationS, sampleIntervalS: 1,
+  }).run;
 }
 
 /**

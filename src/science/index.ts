@@ -9,10 +9,11 @@ export * from './solver/index.ts';
 export {
   constantVolatilityEquilibrium, raoultEquilibrium, simulateBatchStill, findPlateaus, APPARATUS_DEFAULTS,
   fenskeStages, estimatePlatesFromFractions, fitPlatesToHeadCurve, columnEquilibrium, preferredColumnEquilibrium, componentDataFor, heatForBoilup, predictHeadTrace,
+  simulateBenchStill,
 } from './column/index.ts';
 export type {
   StageEquilibrium, ComponentData, ConstantVolatilityOptions, SaturationPressure, BatchStillConfig, ColumnSpec,
   PotSpec, HeadSpec, HeatStep, CutPlan as StillCutPlan, HeadTemperatureWindow, TimeCut, VolumeCut, BatchStillRun,
   BatchStillTrace, BatchStillAnnotations, ReceiverContent, Plateau, Interval, PlateEstimate, HeadCurve, PlateFit,
-  SimulatorComponentData, BoilupHeatInput, ConstantBoilingVapour,
+  SimulatorComponentData, BoilupHeatInput, ConstantBoilingVapour, BenchStillInput,
 } from './column/index.ts';

@@ -27,4 +27,6 @@ export type { SimulatorComponentData } from './componentDataFor.ts';
 export { heatForBoilup } from './heatForBoilup.ts';
 export type { BoilupHeatInput } from './heatForBoilup.ts';
 export { predictHeadTrace } from './predictHeadTrace.ts';
+export { simulateBenchStill } from './simulateBenchStill.ts';
+export type { BenchStillInput } from './simulateBenchStill.ts';
 export type { HeadPredictionInput } from './predictHeadTrace.ts';

@@ -1,10 +1,8 @@
 import type { Compound } from '../compounds/index.ts';
 import type { ThermoModel } from '../vle/index.ts';
-import { APPARATUS_DEFAULTS } from './apparatusDefaults.ts';
 import { columnEquilibrium } from './columnEquilibrium.ts';
 import { componentDataFor } from './componentDataFor.ts';
-import { heatForBoilup } from './heatForBoilup.ts';
-import { simulateBatchStill } from './simulateBatchStill.ts';
+import { simulateBenchStill } from './simulateBenchStill.ts';
 
 export interface HeadPredictionInput {
   compounds: readonly Compound[];
@@ -33,22 +31,10 @@ export interface HeadPredictionInput {
 export function predictHeadTrace(input: HeadPredictionInput): { time_s: number[]; head_c: number[] } {
   const { compounds, chargeMol, pressurePa } = input;
   const roomK = input.roomK ?? 294.15;
-  const equilibrium = columnEquilibrium(compounds, input.model);
-  const components = componentDataFor(compounds);
-  const total = chargeMol.reduce((a, b) => a + b, 0);
-  if (!(total > 0)) throw new RangeError('the charge must be more than nothing');
-  const heatW = heatForBoilup({
-    equilibrium, components, x: chargeMol.map((n) => n / total), pressurePa, roomK,
-    boilupM3PerS: ((input.boilupMlPerMin ?? 4) * 1e-6) / 60,
-    potLossWPerK: APPARATUS_DEFAULTS.lossWPerK,
-    columnLossWPerK: APPARATUS_DEFAULTS.wallLossWPerK + APPARATUS_DEFAULTS.headLossWPerK,
-  });
-  const run = simulateBatchStill({
-    equilibrium, components, chargeMol: [...chargeMol], pressurePa, roomK,
-    column: { stages: Math.max(0, Math.round(input.plates)), refluxRatio: input.refluxRatio ?? 2 },
-    heat: [{ fromS: 0, heatW }],
-    durationS: input.durationS ?? 8 * 3600,
-    sampleIntervalS: input.sampleIntervalS ?? 30,
+  const { run } = simulateBenchStill({
+    equilibrium: columnEquilibrium(compounds, input.model), components: componentDataFor(compounds), chargeMol, pressurePa, roomK,
+    plates: Math.max(0, Math.round(input.plates)), refluxRatio: input.refluxRatio ?? 2, boilupMlPerMin: input.boilupMlPerMin ?? 4,
+    durationS: input.durationS ?? 8 * 3600, sampleIntervalS: input.sampleIntervalS ?? 30,
   });
   const dryS = run.annotations.potDryS ?? Infinity;
   const time_s: number[] = [];

@@ -13,11 +13,9 @@
  */
 import { findCompound } from '../compounds/index.ts';
 import { molesFromAmounts } from '../vle/index.ts';
-import { APPARATUS_DEFAULTS } from '../column/apparatusDefaults.ts';
 import { columnEquilibrium, preferredColumnEquilibrium } from '../column/columnEquilibrium.ts';
 import { componentDataFor } from '../column/componentDataFor.ts';
-import { heatForBoilup } from '../column/heatForBoilup.ts';
-import { simulateBatchStill } from '../column/simulateBatchStill.ts';
+import { simulateBenchStill } from '../column/simulateBenchStill.ts';
 import { createRandom } from '../sensorModel/random.ts';
 import { firstOrderLag } from '../sensorModel/firstOrderLag.ts';
 import { demoMixtureWords } from './demoMixtureWords.ts';
@@ -111,15 +109,9 @@ function simulateDemo(charge: DemoCharge | undefined, roomC: number, pressurePa:
   const equilibrium = charge ? preferredColumnEquilibrium(compounds).equilibrium : columnEquilibrium(compounds, 'ideal');
   const components = componentDataFor(compounds);
   const chargeMol = charge ? [...charge.chargeMol] : molesFromAmounts(compounds, demoMixture.chargeMl.map((ml) => ml * 1e-6), 'volume');
-  const total = chargeMol.reduce((a, b) => a + b, 0);
-  const roomK = roomC + 273.15;
-  const heatW = heatForBoilup({
-    equilibrium, components, x: chargeMol.map((n) => n / total), pressurePa, roomK, boilupM3PerS: (boilupMlPerMin * 1e-6) / 60,
-    potLossWPerK: APPARATUS_DEFAULTS.lossWPerK, columnLossWPerK: APPARATUS_DEFAULTS.wallLossWPerK + APPARATUS_DEFAULTS.headLossWPerK,
-  });
-  const run = simulateBatchStill({
-    equilibrium, components, chargeMol, pressurePa, roomK,
-    column: { stages: plates, refluxRatio: reflux }, heat: [{ fromS: 0, heatW }], durationS: DURATION_S, sampleIntervalS: 1,
+  const { run } = simulateBenchStill({
+    equilibrium, components, chargeMol, pressurePa, roomK: roomC + 273.15,
+    plates, refluxRatio: reflux, boilupMlPerMin, durationS: DURATION_S, sampleIntervalS: 1,
   });
   const t = run.trace;
   const truthC = t.headK.map((k) => k - 273.15);

@@ -1,5 +1,5 @@
 import {
-  APPARATUS_DEFAULTS, columnEquilibrium, componentDataFor, heatForBoilup, simulateBatchStill, simulateTotalReflux,
+  columnEquilibrium, componentDataFor, simulateBenchStill, simulateTotalReflux,
   type Compound, type PreparedMixture, type ThermoModel,
 } from '../../science/index.ts';
 
@@ -50,17 +50,10 @@ export function predictDistillation({ compounds, model, mixture, x, chargeMol, p
 }
 
 function simulatedSlices(compounds: readonly Compound[], model: ThermoModel, x: readonly number[], chargeMol: number, pressurePa: number, plates: number): PredictedSlice[] {
-  const equilibrium = columnEquilibrium(compounds, model);
-  const components = componentDataFor(compounds);
-  const roomK = 294.15;
-  const heatW = heatForBoilup({
-    equilibrium, components, x, pressurePa, roomK, boilupM3PerS: 4e-6 / 60,
-    potLossWPerK: APPARATUS_DEFAULTS.lossWPerK, columnLossWPerK: APPARATUS_DEFAULTS.wallLossWPerK + APPARATUS_DEFAULTS.headLossWPerK,
-  });
-  const run = simulateBatchStill({
-    equilibrium, components, chargeMol: x.map((xi) => xi * chargeMol), pressurePa, roomK,
-    column: { stages: Math.max(0, Math.round(plates)), refluxRatio: 2 },
-    heat: [{ fromS: 0, heatW }], durationS: 10 * 3600, sampleIntervalS: 20,
+  const { run } = simulateBenchStill({
+    equilibrium: columnEquilibrium(compounds, model), components: componentDataFor(compounds), chargeMol: x.map((xi) => xi * chargeMol),
+    pressurePa, roomK: 294.15, plates: Math.max(0, Math.round(plates)), refluxRatio: 2, boilupMlPerMin: 4,
+    durationS: 10 * 3600, sampleIntervalS: 20,
   });
   const { timeS, headK, distilledMol } = run.trace;
   const dryS = run.annotations.potDryS ?? Infinity;
