@@ -30,6 +30,11 @@ export function normaliseExpectedPlateaus(plateaus: readonly ExpectedPlateau[]):
   return checked.sort((a, b) => a.fromC - b.fromC);
 }
 
+/** A level outside every expected plateau (none given: never): a mixed fraction. */
+export function isOutsideExpected(expected: readonly ExpectedPlateau[], levelC: number): boolean {
+  return expected.length > 0 && !expected.some((p) => levelC >= p.fromC && levelC <= p.toC);
+}
+
 /** Index of the window holding `headC`, else of the nearest window below it, else 0. */
 export function windowIndexAt(plan: readonly CutWindow[], headC: number): number {
   let index = 0;

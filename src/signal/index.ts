@@ -2,7 +2,7 @@
 export { RunWatcher } from './runWatcher.ts';
 export { analyzeReadings } from './analyzeReadings.ts';
 export { resolveWatcherOptions, defaultWatcherOptions, type WatcherOptions } from './watcherOptions.ts';
-export { normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
+export { isOutsideExpected, normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
 export { parseCutPlan, parseWatchContext } from './parseCutPlan.ts';
 export { cusumThresholdForMeanTime, cusumMeanTimeToFalseAlarmS } from './cusumThreshold.ts';
 export { wordWatchEvent, sensorSilentWording, isAlarmKind, type AlarmCategory, type EventWording } from './eventWording.ts';

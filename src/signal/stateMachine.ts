@@ -1,5 +1,5 @@
 import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
-import { windowIndexAt } from './cutPlan.ts';
+import { isOutsideExpected, windowIndexAt } from './cutPlan.ts';
 import { createEwRegression, ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression, type EwRegression } from './ewRegression.ts';
 import type { EventKind, FaultReason, PlateauReason, StallReason, WatchState } from './types.ts';
 import type { WatcherState } from './watcherState.ts';
@@ -186,8 +186,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
 
 /** A level outside every expected plateau of the charge (none known: never). */
 function isMixedLevel(s: WatcherState, levelC: number): boolean {
-  const expected = s.expectedPlateaus ?? [];
-  return expected.length > 0 && !expected.some((p) => levelC >= p.fromC && levelC <= p.toC);
+  return isOutsideExpected(s.expectedPlateaus ?? [], levelC);
 }
 
 /**

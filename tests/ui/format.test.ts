@@ -43,6 +43,9 @@ describe('format', () => {
 
   it('stateWords gives the plateau on the chemist\'s scale', () => {
     expect(stateWords('plateau', 77.1, true, celsius)).toBe('Steady at 77.1 °C');
+    const expected = [{ label: 'a', fromC: 74, toC: 80 }, { label: 'b', fromC: 105, toC: 112 }];
+    expect(stateWords('plateau', 77.1, true, celsius, expected)).toBe('Steady at 77.1 °C');
+    expect(stateWords('plateau', 92, true, celsius, expected)).toBe('Steady at 92.0 °C: a mixed fraction');
     // 77.1 degC x 1.8 + 32 = 170.78 degF (NIST SP 811 B.8)
     expect(stateWords('plateau', 77.1, true, fahrenheitComma)).toBe('Steady at 170,8 °F');
   });

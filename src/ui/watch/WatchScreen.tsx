@@ -2,7 +2,7 @@ import type { ComponentChildren } from 'preact';
 import { useState } from 'preact/hooks';
 import { headRateCPerMin, type RunPlan } from '../../run/index.ts';
 import type { Figures } from '../../science/index.ts';
-import type { RunSession } from '../../session/index.ts';
+import { planExpectedPlateaus, type RunSession } from '../../session/index.ts';
 import { TraceChart, type TemperatureBand, type TraceMarker } from '../chart/TraceChart.tsx';
 import { ConfirmDialog } from '../common/ConfirmDialog.tsx';
 import { TextDialog } from '../common/TextDialog.tsx';
@@ -67,7 +67,7 @@ export function WatchScreen({ session, backgroundNotice, onDismissBackgroundNoti
           {formatHead(headC, figures)}
           <span class="head-unit">{figures.temperatureLabel}</span>
         </span>
-        <span class="head-state" data-testid="watch-state">{stateWords(session.watcherState, session.plateauC, hasVapour, figures)}</span>
+        <span class="head-state" data-testid="watch-state">{stateWords(session.watcherState, session.plateauC, hasVapour, figures, planExpectedPlateaus(header.plan))}</span>
       </div>
       {sensorPanel}
 
