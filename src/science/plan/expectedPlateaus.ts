@@ -1,5 +1,6 @@
 import type { Compound } from '../compounds/compound.ts';
 import { tSatK } from '../compounds/vapourPressure.ts';
+import { ConvergenceError } from '../vle/convergenceError.ts';
 import { dewT } from '../vle/equilibrium.ts';
 import type { PairAzeotropes } from '../vle/findAzeotropes.ts';
 import type { ThermoModel } from '../vle/thermoModel.ts';
@@ -25,7 +26,10 @@ const ABOVE_K = 1.5;
  * points of its vapour with a tenth of any lighter component (the lowest) to those with a tenth of
  * any heavier one (the highest), the pure boiling point for none, widened for the thermometer; each
  * azeotrope of a pair is a plateau of its own about its temperature. A steady head outside all of
- * them is a mixed stretch: no component is coming over nearly pure.
+ * them is a mixed stretch: no component is coming over nearly pure. Where a dew point will not
+ * converge (a strongly associating pair, such as an acid with a base), nothing is expected: the
+ * watcher then takes every plateau as a component's, as with no charge known, rather than call
+ * a component's plateau mixed.
  */
 export function expectedPlateaus(compounds: readonly Compound[], pPa: number, model: ThermoModel, azeotropes: readonly PairAzeotropes[]): ExpectedPlateau[] {
   if (!(pPa > 0)) throw new RangeError(`pressure must be > 0 Pa (got ${pPa})`);
@@ -36,10 +40,16 @@ export function expectedPlateaus(compounds: readonly Compound[], pPa: number, mo
     y[order[other]!.i] = 1 - PURITY;
     return dewT(compounds, y, pPa, model).tK;
   };
-  const bands: ExpectedPlateau[] = order.map((o, k) => {
-    const dews = order.map((_, j) => (j === k ? o.tK : withTenthOf(k, j)));
-    return { label: o.c.name, fromTK: Math.min(...dews) - BELOW_K, toTK: Math.max(...dews) + ABOVE_K };
-  });
+  let bands: ExpectedPlateau[];
+  try {
+    bands = order.map((o, k) => {
+      const dews = order.map((_, j) => (j === k ? o.tK : withTenthOf(k, j)));
+      return { label: o.c.name, fromTK: Math.min(...dews) - BELOW_K, toTK: Math.max(...dews) + ABOVE_K };
+    });
+  } catch (error) {
+    if (error instanceof ConvergenceError) return [];
+    throw error;
+  }
   for (const pair of azeotropes) {
     for (const azeotrope of pair.azeotropes) {
       bands.push({ label: `${pair.pair[0]} + ${pair.pair[1]} azeotrope`, fromTK: azeotrope.tK - BELOW_K, toTK: azeotrope.tK + ABOVE_K });

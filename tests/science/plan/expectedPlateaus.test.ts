@@ -41,6 +41,11 @@ describe('expectedPlateaus', () => {
     expect(published.tC + 273.15).toBeLessThan(band.toTK);
   });
 
+  it('expects nothing, rather than fail the plan, where a dew point will not converge (acetic acid with pyridine, UNIFAC)', () => {
+    const pair = [findCompound('acetic acid'), findCompound('pyridine')];
+    expect(expectedPlateaus(pair, 101_325, 'unifac', [])).toEqual([]);
+  });
+
   it('refuses a pressure of zero with a reason', () => {
     expect(() => expectedPlateaus(compounds, 0, 'ideal', [])).toThrow(/pressure must be > 0/);
   });
