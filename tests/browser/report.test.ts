@@ -15,7 +15,8 @@ afterAll(async () => {
 /** The head temperature shown on the Watch screen (comma or point), acknowledging any alarm that covers it. */
 async function headTemp(page: Page): Promise<number> {
   const ack = page.locator('.alarm-ack');
-  // force: the banner pulses, and waiting for it to hold still lets the fast demo run on for minutes.
+  // force: at 120x the page re-renders many times a second, and Playwright's wait for the button
+  // to hold still (the banner has no animation) lets the fast demo run on for minutes.
   if (await ack.isVisible()) await ack.click({ force: true, timeout: 2000 }).catch(() => undefined);
   const text = (await page.getByTestId('head-temp').textContent()) ?? '';
   return Number.parseFloat(text.replace(',', '.'));
