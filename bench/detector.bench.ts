@@ -13,7 +13,7 @@ import { scoreRun, summariseScores, truthWindows, type RunScore, type ScoredEven
 import { syntheticTruth } from '../tests/support/syntheticTruth.ts';
 import { makeCorpus, syntheticTruthSource, type CorpusRun, type TruthSource } from './corpus.ts';
 import { fixedAlarmPeer, slopePeer } from './peers.ts';
-import { cutWindowsFor, expectedPlateausFor, simulatedTruthSource } from './simulatedTruth.ts';
+import { runPlanFor, simulatedTruthSource } from './simulatedTruth.ts';
 
 const args = process.argv.slice(2);
 const positional = args.filter((a, i) => !a.startsWith('--') && args[i - 1] !== '--only' && args[i - 1] !== '--options');
@@ -36,8 +36,8 @@ type Detector = { name: string; run: (r: CorpusRun) => ScoredEvent[] };
 // as the change-receiver alarm a breakthrough is.
 const detectors: Detector[] = [
   { name: 'run watcher', run: (r) => analyzeReadings(r.timeS, r.headC, [], overrides) },
-  { name: 'with charge', run: (r) => analyzeReadings(r.timeS, r.headC, { expectedPlateaus: expectedPlateausFor(r.spec) }, overrides) },
-  { name: 'with plan', run: (r) => analyzeReadings(r.timeS, r.headC, { plan: cutWindowsFor(r.spec), expectedPlateaus: expectedPlateausFor(r.spec) }, overrides) },
+  { name: 'with charge', run: (r) => analyzeReadings(r.timeS, r.headC, { expectedPlateaus: runPlanFor(r.spec).expectedPlateaus }, overrides) },
+  { name: 'with plan', run: (r) => analyzeReadings(r.timeS, r.headC, { plan: runPlanFor(r.spec).windows, expectedPlateaus: runPlanFor(r.spec).expectedPlateaus }, overrides) },
   { name: 'fixed bp+3', run: (r) => fixedAlarmPeer(r.timeS, r.headC, r.boilingPointsC) },
   { name: 'MA slope', run: (r) => slopePeer(r.timeS, r.headC) },
 ];

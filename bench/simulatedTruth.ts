@@ -5,12 +5,11 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import {
-  APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, expectedPlateaus, preferredColumnEquilibrium, findAzeotropes, findCompound, findPlateaus,
+  APPARATUS_DEFAULTS, MissingUnifacDataError, componentDataFor, preferredColumnEquilibrium, findAzeotropes, findCompound, findPlateaus,
   molesFromAmounts, planCuts, simulateBenchStill, tSatK, type BatchStillRun, type Compound, type ConstantBoilingVapour,
   type HeatStep,
 } from '../src/science/index.ts';
-import { toRunPlan } from '../src/run/index.ts';
-import type { CutWindow, ExpectedPlateau } from '../src/signal/index.ts';
+import { toRunPlan, type RunPlan } from '../src/run/index.ts';
 import { createRandom } from '../src/science/sensorModel/index.ts';
 import type { PurityInterval, RunTruth, TruthEvent } from '../src/signal/scoring/index.ts';
 import type { CorpusRunSpec, TruthSource, TruthSourceResult } from './corpus.ts';
@@ -28,11 +27,16 @@ interface SimulationPlan {
   boilupMlPerMin: number;
 }
 
+const runPlans = new Map<number, RunPlan>();
+
 /**
- * The cut plan the app would make for a corpus run's charge on Prepare (the science core's
- * planner, UNIFAC where it can), as receiver windows for the watcher.
+ * The plan the app would make for a corpus run's charge on Prepare (the science core's planner,
+ * UNIFAC where it can): its receiver windows and expected plateaus, as the app's plan carries
+ * them to the watcher. Made once per run (keyed by its seed), as every detector column asks.
  */
-export function cutWindowsFor(spec: CorpusRunSpec): CutWindow[] {
+export function runPlanFor(spec: CorpusRunSpec): RunPlan {
+  const known = runPlans.get(spec.seed);
+  if (known) return known;
   const plan = planFor(spec);
   const chargeMol = molesFromAmounts(plan.compounds, plan.chargeMl.map((ml) => ml * 1e-6), 'volume');
   const total = chargeMol.reduce((a, b) => a + b, 0);
@@ -44,18 +48,9 @@ export function cutWindowsFor(spec: CorpusRunSpec): CutWindow[] {
     if (!(error instanceof MissingUnifacDataError)) throw error;
     cut = planCuts({ ...input, model: 'ideal' });
   }
-  return toRunPlan(cut, spec.pressurePa, spec.plates).windows;
-}
-
-/**
- * Where the planner expects each component's (and azeotrope's) plateau for a corpus run's
- * charge at its pressure (what the app's plan carries to the watcher).
- */
-export function expectedPlateausFor(spec: CorpusRunSpec): ExpectedPlateau[] {
-  const compounds = spec.components.map((c) => findCompound(c.name));
-  const { model } = preferredColumnEquilibrium(compounds);
-  return expectedPlateaus(compounds, spec.pressurePa, model, findAzeotropes(compounds, spec.pressurePa, model))
-    .map((p) => ({ label: p.label, fromC: p.fromTK - 273.15, toC: p.toTK - 273.15 }));
+  const runPlan = toRunPlan(cut, spec.pressurePa, spec.plates);
+  runPlans.set(spec.seed, runPlan);
+  return runPlan;
 }
 
 function planFor(spec: CorpusRunSpec): SimulationPlan {
