@@ -30,9 +30,14 @@ export function normaliseExpectedPlateaus(plateaus: readonly ExpectedPlateau[]):
   return checked.sort((a, b) => a.fromC - b.fromC);
 }
 
+/** Whether an expected plateau holds a level. */
+export function holdsLevel(plateau: ExpectedPlateau, levelC: number): boolean {
+  return levelC >= plateau.fromC && levelC <= plateau.toC;
+}
+
 /** A level outside every expected plateau (none given: never): a mixed fraction. */
 export function isOutsideExpected(expected: readonly ExpectedPlateau[], levelC: number): boolean {
-  return expected.length > 0 && !expected.some((p) => levelC >= p.fromC && levelC <= p.toC);
+  return expected.length > 0 && !expected.some((p) => holdsLevel(p, levelC));
 }
 
 /** Index of the window holding `headC`, else of the nearest window below it, else 0. */

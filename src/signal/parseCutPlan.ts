@@ -1,5 +1,5 @@
 import { normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
-import type { CutWindow, ExpectedPlateau, WatchContext } from './types.ts';
+import type { CutWindow, ExpectedPlateau } from './types.ts';
 
 /**
  * A cut plan from JSON: an object with a `cuts` (or `windows`, or the `fractions` that
@@ -7,7 +7,7 @@ import type { CutWindow, ExpectedPlateau, WatchContext } from './types.ts';
  * temperatures in degC. Throws RangeError with the reason for anything else.
  */
 export function parseCutPlan(json: string): CutWindow[] {
-  return parseWatchContext(json).plan as CutWindow[];
+  return parseWatchContext(json).plan;
 }
 
 /**
@@ -15,7 +15,7 @@ export function parseCutPlan(json: string): CutWindow[] {
  * (`{ "label": "toluene", "from_c": 108.1, "to_c": 116.3 }`): where each component's plateau can
  * lie, so the watcher can tell a mixed stretch from a component coming over.
  */
-export function parseWatchContext(json: string): Required<WatchContext> {
+export function parseWatchContext(json: string): { plan: CutWindow[]; expectedPlateaus: ExpectedPlateau[] } {
   let doc: unknown;
   try {
     doc = JSON.parse(json);

@@ -1,5 +1,5 @@
 import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
-import { isOutsideExpected, windowIndexAt } from './cutPlan.ts';
+import { holdsLevel, isOutsideExpected, windowIndexAt } from './cutPlan.ts';
 import { createEwRegression, ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression, type EwRegression } from './ewRegression.ts';
 import type { EventKind, FaultReason, PlateauReason, StallReason, WatchState } from './types.ts';
 import type { WatcherState } from './watcherState.ts';
@@ -198,7 +198,7 @@ function isLastLevel(s: WatcherState, levelC: number): boolean {
   const expected = s.expectedPlateaus ?? [];
   if (expected.length < 2) return false;
   const last = expected.reduce((a, b) => (b.toC > a.toC ? b : a));
-  return levelC >= last.fromC && levelC <= last.toC && !expected.some((p) => p !== last && levelC >= p.fromC && levelC <= p.toC);
+  return holdsLevel(last, levelC) && !expected.some((p) => p !== last && holdsLevel(p, levelC));
 }
 
 function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: number, fastC: number, sink: EventSink): void {

@@ -32,8 +32,8 @@ export interface StuckReadings {
   /** Sum of squared steps between readings in this stretch, and their number. Units: degC^2. */
   stepSquares: number;
   steps: number;
-  /** How fast the head was climbing when the value came (the lesser of the watcher's fast and
-   * slow slopes; NaN: not known). Absent in older saves. Units: degC/s. */
+  /** How fast the head was climbing when the value came (the watcher's fast slope; NaN: not
+   * known). Absent in older saves. Units: degC/s. */
   climbCPerS?: number;
 }
 
