@@ -35,6 +35,10 @@ export interface StuckReadings {
   /** How fast the head was climbing when the value came (the watcher's fast slope; NaN: not
    * known). Absent in older saves. Units: degC/s. */
   climbCPerS?: number;
+  /** The noise of the plateau this run began on, once that plateau had shown it (NaN: it began
+   * elsewhere): the board does not get quieter when the watcher's state changes, so a run that
+   * began on a plateau and outlasts it is still judged by it. Absent in older saves. Units: degC. */
+  runSigmaC?: number;
 }
 
 /** A run this unlikely from noise is a fault (about one false alarm in 10^9 runs). */
@@ -53,7 +57,7 @@ const CLIMB_MIN_C_PER_S = 0.1;
 const CLIMB_STEPS = 8;
 
 export function createStuckReadings(): StuckReadings {
-  return { state: '', valueC: Number.NaN, sinceS: Number.NaN, count: 0, sigmaC: Number.NaN, quantumC: Number.NaN, changes: 0, stepSquares: 0, steps: 0, climbCPerS: Number.NaN };
+  return { state: '', valueC: Number.NaN, sinceS: Number.NaN, count: 0, sigmaC: Number.NaN, quantumC: Number.NaN, changes: 0, stepSquares: 0, steps: 0, climbCPerS: Number.NaN, runSigmaC: Number.NaN };
 }
 
 // Abramowitz and Stegun 7.1.26 (error below 1.5e-7), enough for a run-length threshold.
@@ -104,6 +108,7 @@ export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number
     t.climbCPerS = climbCPerS;
     // Successive steps of white noise have variance 2 sigma^2; the identical readings count as steps of 0.
     t.sigmaC = t.steps > 0 ? Math.sqrt(t.stepSquares / t.steps / 2) : Number.NaN;
+    t.runSigmaC = state === 'plateau' && t.changes >= MIN_CHANGES ? t.sigmaC : Number.NaN;
     return false;
   }
   t.count++;
@@ -114,9 +119,13 @@ export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number
   if (state === 'rising') return false;
   if (state === 'leaving') {
     const climb = t.climbCPerS ?? Number.NaN;
-    return climb >= CLIMB_MIN_C_PER_S && t.quantumC > 0 && t.count >= MIN_READINGS && stillS >= MIN_SECONDS && climb * stillS >= CLIMB_STEPS * t.quantumC;
+    if (climb >= CLIMB_MIN_C_PER_S && t.quantumC > 0 && t.count >= MIN_READINGS && stillS >= MIN_SECONDS && climb * stillS >= CLIMB_STEPS * t.quantumC) return true;
   }
-  if (state !== 'plateau' || t.changes < MIN_CHANGES) return false;
-  const needed = stuckRunLength(t.sigmaC, t.quantumC);
+  // On the plateau that has shown its noise, by that noise; elsewhere (a board hung as the
+  // breakthrough began, which the watcher then follows out of the plateau and onto the frozen
+  // value as if it were the next one), by the noise of the plateau the run began on.
+  const sigmaC = state === 'plateau' && t.changes >= MIN_CHANGES ? t.sigmaC : (t.runSigmaC ?? Number.NaN);
+  if (!Number.isFinite(sigmaC)) return false;
+  const needed = stuckRunLength(sigmaC, t.quantumC);
   return t.count >= needed && stillS >= Math.max(MIN_SECONDS, needed - 1);
 }

@@ -93,13 +93,13 @@ describe('a reading stuck where it must move', () => {
   // Shaped demo: a plateau at 77 degC, then from 1500 s a breakthrough that settles on 110 degC
   // (climbing 0.4 degC/s at first, with an 80 s time constant), read each second on a quiet
   // 0.25 degC board.
-  function climbingTrace(freezeS: number): { t: number[]; c: number[] } {
+  function climbingTrace(freezeS: number, sigmaC = 0.05, stepC = 0.25): { t: number[]; c: number[] } {
     const random = createRandom(11);
     const t: number[] = [], c: number[] = [];
     let frozen = Number.NaN;
     for (let time = 0; time <= 2400; time++) {
       const head = time < 1500 ? headAt(time) : 77 + 33 * (1 - Math.exp(-(time - 1500) / 80));
-      let value = Math.round((head + 0.05 * random.normal()) / 0.25) * 0.25;
+      let value = Math.round((head + sigmaC * random.normal()) / stepC) * stepC;
       if (time >= freezeS) value = Number.isNaN(frozen) ? (frozen = c[c.length - 1]!) : frozen;
       t.push(time);
       c.push(value);
@@ -121,5 +121,25 @@ describe('a reading stuck where it must move', () => {
     const events = run(new RunWatcher(), t, c);
     expect(events.some((e) => e.kind === 'breakthrough')).toBe(true);
     expect(stuckFaults(events)).toHaveLength(0);
+  });
+
+  it('a board that hangs as a slow breakthrough begins is a fault within a minute, though the watcher follows the frozen value off the plateau', () => {
+    // Shaped demo: the plateau at 77 degC read each second by a fine, noisy board (0.2 degC sd,
+    // 0.01 degC steps), from 1500 s a slow climb of 3 degC/min, the board hung at 1530 s (78.5
+    // degC). The frozen value is 1.5 degC up: a breakthrough, and a climb too slow for the climb
+    // test; after it the watcher would take the value for the next plateau, on which no noise
+    // has yet been seen. The plateau the run began on has shown the board's noise.
+    const random = createRandom(5);
+    const t: number[] = [], c: number[] = [];
+    for (let time = 0; time <= 2400; time++) {
+      const head = time < 1500 ? headAt(time) : 77 + 0.05 * (Math.min(time, 1530) - 1500);
+      t.push(time);
+      c.push(time <= 1530 ? Math.round((head + 0.2 * random.normal()) * 100) / 100 : c[c.length - 1]!);
+    }
+    const events = run(new RunWatcher(), t, c);
+    const faults = stuckFaults(events);
+    expect(faults).toHaveLength(1);
+    expect(faults[0]!.timeS).toBeGreaterThanOrEqual(1530 + 10);
+    expect(faults[0]!.timeS).toBeLessThanOrEqual(1530 + 60);
   });
 });
