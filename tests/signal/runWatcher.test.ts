@@ -224,7 +224,7 @@ describe('RunWatcher on shapes the column simulator makes', () => {
 describe('RunWatcher breakthrough timing', () => {
   // Invented profiles (no source needed), through a board as above: 0.5 s readings, 0.15 degC
   // noise, 0.25 degC steps, a draught of 0.1 degC over 40 s.
-  function through(points: [number, number][], seed = 5): { timeS: Float64Array; headC: Float64Array; truthC: (t: number) => number } {
+  function through(points: [number, number][], seed = 5, board: Partial<SensorOptions> = {}): { timeS: Float64Array; headC: Float64Array; truthC: (t: number) => number } {
     const end = points.at(-1)![0];
     const truthC = (t: number): number => {
       const k = points.findIndex(([pt]) => pt > t);
@@ -233,7 +233,7 @@ describe('RunWatcher breakthrough timing', () => {
       return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
     };
     const timeS = Float64Array.from({ length: end + 1 }, (_, i) => i);
-    const r = sensorReadings(timeS, timeS.map(truthC), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
+    const r = sensorReadings(timeS, timeS.map(truthC), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40, ...board });
     return { timeS: r.timeS, headC: r.headC, truthC };
   }
   const crossing = (truthC: (t: number) => number, aboveC: number, fromS: number): number => {
@@ -266,6 +266,23 @@ describe('RunWatcher breakthrough timing', () => {
     const dueS = crossing(truthC, events.find((e) => e.kind === 'plateau')!.headC + 1, 1500);
     expect(breakthrough.timeS).toBeGreaterThan(dueS - 5);
     expect(breakthrough.timeS).toBeLessThan(dueS + 5);
+  });
+
+  it('a short plateau that steps up 1.3 degC just after it is declared, then creeps, alarms at the step', () => {
+    // The head holds 70 s at 80 degC, steps up 1.3 degC in 20 s and creeps on at 0.25 degC/min,
+    // read by a noisier board (0.28 degC, no steps). The plateau is declared a few seconds before
+    // the step: if the level entered counted as one reading, the first readings on the step
+    // (some within the level's 0.9 degC tracking band) would drag it up after the head, and the
+    // rise would not clear it for minutes (2 of these 6 alarmed in time so).
+    for (const seed of [5, 6, 7, 8, 9, 10]) {
+      const { timeS, headC, truthC } = through([[0, 20], [300, 20], [320, 80], [390, 80], [410, 81.3], [1500, 85.8]], seed, { noiseSdC: 0.28, quantumC: 0 });
+      const events = analyzeReadings(timeS, headC);
+      expect(events.find((e) => e.kind === 'plateau')!.timeS).toBeLessThan(395);
+      const breakthrough = events.find((e) => e.kind === 'breakthrough');
+      const dueS = crossing(truthC, 81, 390);
+      expect(breakthrough?.timeS).toBeGreaterThan(dueS - 60);
+      expect(breakthrough?.timeS).toBeLessThan(dueS + 60);
+    }
   });
 
   it('a state saved before the plateau course existed resumes and still finds the breakthrough', () => {
