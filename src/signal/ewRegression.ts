@@ -50,6 +50,17 @@ export function ewRegressionLevel(r: EwRegression): number {
   return (r.tt * r.y - r.t * r.ty) / det;
 }
 
+/**
+ * How many independent readings the fitted level is worth: for white noise its variance is that
+ * of a plain mean of this many. Once the fit spans several time constants that is 0.81 x its
+ * weight sum (weighted least squares with weights e^(-age/tau): the intercept's variance is
+ * (X'WX)^-1 X'W^2X (X'WX)^-1, worked numerically; the test checks it by simulation).
+ */
+export function ewRegressionEffectiveReadings(r: EwRegression): number {
+  return LEVEL_EFFECTIVE_PER_WEIGHT * r.w;
+}
+const LEVEL_EFFECTIVE_PER_WEIGHT = 0.81;
+
 /** Weighted mean, with no trend correction (lags a ramp, ignores nothing). Units: degC. */
 export function ewRegressionMean(r: EwRegression): number {
   return r.w > 0 ? r.y / r.w : NaN;

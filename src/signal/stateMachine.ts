@@ -1,6 +1,6 @@
 import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
 import { holdsLevel, isOutsideExpected, windowIndexAt } from './cutPlan.ts';
-import { createEwRegression, ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression, type EwRegression } from './ewRegression.ts';
+import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewRegressionSlope, restartEwRegression, type EwRegression } from './ewRegression.ts';
 import type { EventKind, FaultReason, PlateauReason, StallReason, WatchState } from './types.ts';
 import type { WatcherState } from './watcherState.ts';
 
@@ -18,9 +18,6 @@ const BASELINE_TAU_S = 300;
  * constant. Units: s, degC. */
 const LEVEL_TAU_S = 3000;
 const LEVEL_TRACK_C = 0.9;
-/** Readings' worth of the slow fit's level per unit of its weight sum (white noise; computed
- * numerically for a window of many time constants). */
-const FIT_EFFECTIVE_READINGS = 0.81;
 /** The plateau's course (level and creep) is fitted over this time, well beyond the draughts'
  * correlation time so that it keeps their wander as wander and takes only the creep. Units: s. */
 const COURSE_TAU_S = 300;
@@ -167,10 +164,9 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   if (s.isShoulder) s.brokeFromC = levelC;
   s.levelC = levelC;
   // The level entered is the slow fit's, an average already: it counts as the readings it is
-  // worth (for white noise, the newest point of an exponentially weighted local-linear fit has
-  // the variance of a mean of 0.81 x its weight sum, once it spans a few time constants), so
-  // the first readings after it cannot drag it up a step that the breakthrough then never clears.
-  s.levelCount = Math.max(1, Math.round(FIT_EFFECTIVE_READINGS * s.slow.w));
+  // worth, so the first readings after it cannot drag it up a step that the breakthrough then
+  // never clears.
+  s.levelCount = Math.max(1, Math.round(ewRegressionEffectiveReadings(s.slow)));
   s.course = createEwRegression(COURSE_TAU_S);
   restartEwRegression(s.course, timeS, levelC);
   s.cusumCS = 0;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { createEwRegression, ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from '../../src/signal/ewRegression.ts';
+import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from '../../src/signal/ewRegression.ts';
+import { createRandom } from '../../src/science/sensorModel/index.ts';
 
 describe('ewRegression', () => {
   it('ewRegression on an exact line at irregular times returns its slope and current value', () => {
@@ -25,5 +26,20 @@ describe('ewRegression', () => {
     restartEwRegression(r, 20, 80);
     ewRegressionAdd(r, 21, 81);
     expect(ewRegressionSlope(r)).toBeCloseTo(1, 9);
+  });
+  it('ewRegressionEffectiveReadings: the fitted level on white noise varies as a mean of that many readings', () => {
+    // Simulation of the closed form (weighted least squares): 4000 fits of 300 unit-variance
+    // readings a second apart, tau 30 s, against the variance 1 / n of a mean of n readings.
+    const random = createRandom(3);
+    let sum2 = 0, n = 0;
+    for (let k = 0; k < 4000; k++) {
+      const r = createEwRegression(30);
+      for (let t = 0; t < 300; t++) ewRegressionAdd(r, t, random.normal());
+      sum2 += ewRegressionLevel(r) ** 2;
+      n = ewRegressionEffectiveReadings(r);
+    }
+    // The sample variance of 4000 draws is within 5 % of the true one (2.2 standard errors).
+    expect((sum2 / 4000) * n).toBeGreaterThan(0.95);
+    expect((sum2 / 4000) * n).toBeLessThan(1.05);
   });
 });
