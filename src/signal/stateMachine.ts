@@ -65,6 +65,13 @@ const SHOULDER_C = 3;
 const PAUSE_C = 6;
 const PAUSE_S = 300;
 const CUT_HOLD_S = 5;
+/** A sag in a climb the watcher never took for a plateau (a short cut creeping 1-2 degC/min):
+ * the head falls this far below the climb's peak, for max(10 s, two readings), and comes back
+ * a breakthrough's rise above that peak within 3 minutes. The issue's pre-cut sag is 1-3 degC;
+ * the depth is measured on the fast fit, which rounds a short sag's bottom off. Units: degC, s. */
+const CLIMB_SAG_C = 0.8;
+const CLIMB_SAG_HOLD_S = 10;
+const CLIMB_SAG_WITHIN_S = 180;
 
 /** One reading that passed the spike filter; the filters have already taken it. */
 export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
@@ -145,6 +152,7 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
     fallAway(s, timeS, fastC, sink);
     return;
   }
+  if (s.state !== 'stalled' && watchClimbSag(s, timeS, valueC, fastC, sink)) return;
   // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts.
   if (Number.isNaN(s.creepSinceS) || ewRegressionSlope(s.slow) > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
   if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS) {
@@ -177,6 +185,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.plateauCandidateS = NaN;
   s.hasRaisedCreep = false;
   s.creepSinceS = NaN;
+  s.climbSag = { fromC: NaN, atS: NaN, belowSinceS: NaN };
   s.stallReason = null;
   sink.setState('plateau', timeS);
   let receiver: number | undefined;
@@ -259,14 +268,7 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
       sink.setState('leaving', timeS);
       return;
     }
-    s.brokeFromC = s.levelC;
-    let receiver: number | undefined;
-    if (s.plan.length > 0 && s.receiverIndex + 1 < s.plan.length) {
-      s.receiverIndex++;
-      receiver = s.plan[s.receiverIndex]!.receiver;
-    }
-    sink.setState('leaving', timeS);
-    sink.emit(timeS, 'breakthrough', fastC, undefined, receiver);
+    raiseBreakthrough(s, timeS, s.levelC, fastC, sink);
     return;
   }
   const interval = s.intervalS;
@@ -280,6 +282,57 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
   } else {
     s.sagSinceS = NaN;
   }
+}
+
+/** The head is leaving the plateau at `levelC`: change receivers (the next one, with a plan). */
+function raiseBreakthrough(s: WatcherState, timeS: number, levelC: number, fastC: number, sink: EventSink): void {
+  s.brokeFromC = levelC;
+  let receiver: number | undefined;
+  if (s.plan.length > 0 && s.receiverIndex + 1 < s.plan.length) {
+    s.receiverIndex++;
+    receiver = s.plan[s.receiverIndex]!.receiver;
+  }
+  sink.setState('leaving', timeS);
+  sink.emit(timeS, 'breakthrough', fastC, undefined, receiver);
+}
+
+/**
+ * The pre-cut sag in a climb: a short cut that creeps 1-2 degC/min is never steady enough to be
+ * declared a plateau, but it still ends as the issue describes a cut, the head sagging a degree
+ * or so as the lighter component runs out and then climbing as the next one arrives. A sag of
+ * CLIMB_SAG_C below the climb's peak, held, then the head a breakthrough's rise above that peak
+ * within CLIMB_SAG_WITHIN_S, is that stretch's breakthrough, its level the peak. Only once a
+ * plateau has been seen (the arrival's overshoot is no cut), and with the plateau rules: none
+ * within a shoulder of the last breakthrough's level, off a mixed level, or off the last one.
+ * Returns whether it raised one.
+ */
+function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: number, sink: EventSink): boolean {
+  if (!Number.isFinite(s.levelC)) return false;
+  // States saved before the sag existed carry none: it starts here then.
+  const sag = (s.climbSag ??= { fromC: NaN, atS: NaN, belowSinceS: NaN });
+  if (Number.isNaN(sag.fromC)) {
+    if (!(fastC < s.peakC - CLIMB_SAG_C)) {
+      sag.belowSinceS = NaN;
+      return false;
+    }
+    if (Number.isNaN(sag.belowSinceS)) sag.belowSinceS = timeS;
+    if (timeS - sag.belowSinceS >= Math.max(CLIMB_SAG_HOLD_S, 2 * s.intervalS)) {
+      sag.fromC = s.peakC;
+      sag.atS = timeS;
+      sag.belowSinceS = NaN;
+    }
+    return false;
+  }
+  if (timeS - sag.atS > CLIMB_SAG_WITHIN_S) {
+    sag.fromC = NaN;
+    return false;
+  }
+  if (!(Math.min(fastC, valueC) >= sag.fromC + s.options.breakthroughMinRiseC)) return false;
+  const levelC = sag.fromC;
+  sag.fromC = NaN;
+  if (levelC < (s.brokeFromC ?? NaN) + SHOULDER_C || isMixedLevel(s, levelC) || isLastLevel(s, levelC)) return false;
+  raiseBreakthrough(s, timeS, levelC, fastC, sink);
+  return true;
 }
 
 /**
@@ -296,6 +349,7 @@ function plateauCourseC(course: EwRegression, timeS: number, levelC: number, fla
 
 function fallAway(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
   s.troughC = fastC;
+  s.climbSag = { fromC: NaN, atS: NaN, belowSinceS: NaN };
   s.fallSinceS = NaN;
   s.sagSinceS = NaN;
   sink.setState('stalled', timeS);

@@ -55,6 +55,10 @@ export interface WatcherState {
   hasRaisedCreep: boolean;
   /** Since when the head has climbed slowly without settling. Units: s. */
   creepSinceS: number;
+  /** A sag in a climb (climbSag in stateMachine.ts): the peak it fell from, when it was
+   * confirmed, and since when the head has been below that peak by a sag's depth. NaN: none.
+   * Absent in states saved before it existed. Units: degC, s. */
+  climbSag?: { fromC: number; atS: number; belowSinceS: number };
   /** The run of identical readings (stuckReading.ts). Absent in states saved before it existed. */
   stuck?: StuckReadings;
   receiverIndex: number;
@@ -75,6 +79,6 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: { fromC: NaN, atS: NaN, belowSinceS: NaN }, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
   };
 }

@@ -285,6 +285,38 @@ describe('RunWatcher breakthrough timing', () => {
     }
   });
 
+  // Shaped demo: a plateau at 60 degC, a breakthrough to 66, then a short cut that creeps 2
+  // degC/min to 70 (never steady by the watcher's slope rule) and ends in a sag of `sagC` over
+  // 60 s (a half-sine), after which the head climbs to the next plateau at 96 degC.
+  function shortCut(sagC: number, board: Partial<SensorOptions> = {}, seed = 5): ReturnType<typeof through> {
+    const points: [number, number][] = [[0, 20], [300, 20], [320, 60], [1200, 60.2], [1260, 66], [1380, 70]];
+    for (let t = 1390; t <= 1440; t += 10) points.push([t, 70 - sagC * Math.sin((Math.PI * (t - 1380)) / 60)]);
+    points.push([1560, 94], [1620, 96], [2400, 96.2]);
+    return through(points, seed, board);
+  }
+
+  it('a short creeping cut that ends in a pre-cut sag alarms on the rise after the sag, within 60 s of the head passing its peak + 1 degC', () => {
+    for (const seed of [5, 6, 7]) {
+      const { timeS, headC, truthC } = shortCut(1.5, {}, seed);
+      const events = analyzeReadings(timeS, headC);
+      const breakthroughs = events.filter((e) => e.kind === 'breakthrough');
+      expect(breakthroughs).toHaveLength(2);
+      expect(events.filter((e) => e.kind === 'stall')).toEqual([]);
+      const dueS = crossing(truthC, 71, 1440);
+      expect(breakthroughs[1]!.timeS).toBeGreaterThan(dueS - 60);
+      expect(breakthroughs[1]!.timeS).toBeLessThan(dueS + 60);
+    }
+  });
+
+  it('a noisy board on the same climb with no sag raises no second breakthrough (noise peaks are no sag)', () => {
+    for (const seed of [5, 6, 7]) {
+      const { timeS, headC } = shortCut(0, { intervalS: 2, noiseSdC: 0.5 }, seed);
+      // Up to the next plateau (what a noisy board does once there is not this test's business).
+      const breakthroughs = analyzeReadings(timeS, headC).filter((e) => e.kind === 'breakthrough' && e.timeS < 1700);
+      expect(breakthroughs).toHaveLength(1);
+    }
+  });
+
   it('a state saved before the plateau course existed resumes and still finds the breakthrough', () => {
     const { timeS, headC } = through([[0, 20], [300, 20], [320, 80], [1500, 80.1], [1560, 92], [2400, 92.1]]);
     let w = new RunWatcher();
