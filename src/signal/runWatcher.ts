@@ -1,7 +1,7 @@
 import { isAlarmKind, wordWatchEvent } from './eventWording.ts';
 import { normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
-import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
-import { onAcceptedReading } from './stateMachine.ts';
+import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope } from './ewRegression.ts';
+import { onAcceptedReading, restartSlowFit } from './stateMachine.ts';
 import { spikeFilterPush, spikeFilterReset } from './spikeFilter.ts';
 import { createStuckReadings, pushStuckReading } from './stuckReading.ts';
 import { watcherStateFromJson, watcherStateToJson } from './stateJson.ts';
@@ -183,7 +183,7 @@ export class RunWatcher {
     }
     ewRegressionAdd(s.fast, timeS, valueC);
     // After a clear change of course the old readings only bias the slope that says "steady".
-    if (s.slow.w > 0 && Math.abs(valueC - ewRegressionLevel(s.slow)) > SLOW_RESTART_C) restartEwRegression(s.slow, timeS, valueC);
+    if (s.slow.w > 0 && Math.abs(valueC - ewRegressionLevel(s.slow)) > SLOW_RESTART_C) restartSlowFit(s, timeS, valueC, dtS);
     else ewRegressionAdd(s.slow, timeS, valueC);
     onAcceptedReading(s, timeS, valueC, Math.min(dtS, 3 * interval), this);
   }

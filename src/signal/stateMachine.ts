@@ -126,7 +126,7 @@ function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: num
     s.fallSinceS = NaN;
     sink.setState('rising', timeS);
     // Room-temperature readings would hold the slope up long after the head has settled.
-    restartEwRegression(s.slow, timeS, valueC);
+    restartSlowFit(s, timeS, valueC, dtS);
     if (s.plan.length > 0) s.receiverIndex = 0;
     sink.emit(timeS, 'vapour', valueC, undefined, s.plan[0]?.receiver);
     return;
@@ -141,7 +141,8 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
   // two has neither the overshoot nor the noise peaks, so a fall is measured from a real top.
   s.peakC = Math.max(s.peakC, Math.min(fastC, valueC));
   const interval = s.intervalS;
-  const isSteady = Math.abs(ewRegressionSlope(s.slow)) <= o.flatSlopeCPerS;
+  const slopeCPerS = slowSlope(s);
+  const isSteady = Math.abs(slopeCPerS) <= o.flatSlopeCPerS;
   if (!isSteady) s.plateauCandidateS = NaN;
   else if (Number.isNaN(s.plateauCandidateS)) s.plateauCandidateS = timeS;
   else if (timeS - s.plateauCandidateS >= Math.max(o.plateauHoldS, 3 * interval)) {
@@ -154,13 +155,31 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
   }
   if (s.state !== 'stalled' && watchClimbSag(s, timeS, valueC, fastC, sink)) return;
   // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts.
-  if (Number.isNaN(s.creepSinceS) || ewRegressionSlope(s.slow) > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
+  if (Number.isNaN(s.creepSinceS) || slopeCPerS > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
   if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS) {
     s.hasRaisedCreep = true;
     sink.setState('stalled', timeS);
     s.stallReason = 'creeping';
     sink.emit(timeS, 'stall', fastC, 'creeping');
   }
+}
+
+/**
+ * Forgets the slow fit's readings for a clear change of course (the vapour's arrival, a jump of
+ * degrees), keeping the jump itself as its slope until a second reading gives one: a fit of one
+ * reading has none, and read as 0 it called every restart steady (typed readings that climb
+ * 3 degC or more a reading restart it each time, and such a climb was declared a plateau).
+ */
+export function restartSlowFit(s: WatcherState, timeS: number, valueC: number, dtS: number): void {
+  const fromC = ewRegressionLevel(s.slow);
+  s.slowJumpCPerS = dtS > 0 && Number.isFinite(fromC) ? (valueC - fromC) / dtS : NaN;
+  restartEwRegression(s.slow, timeS, valueC);
+}
+
+/** The slow fit's slope, or the jump that restarted it while it has one reading. Units: degC/s. */
+function slowSlope(s: WatcherState): number {
+  const jump = s.slowJumpCPerS ?? Number.NaN;
+  return s.slow.w < 1.5 && Number.isFinite(jump) ? jump : ewRegressionSlope(s.slow);
 }
 
 function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: EventSink): void {

@@ -28,6 +28,9 @@ export interface WatcherState {
   spikes: SpikeFilter;
   fast: EwRegression;
   slow: EwRegression;
+  /** The jump that last restarted the slow fit, over the time it took: the fit's slope until it
+   * has a second reading (NaN: not known). Absent in older saves. Units: degC/s. */
+  slowJumpCPerS?: number;
   /** Running variance of one-step prediction errors of the fast filter. Units: degC^2. */
   innovationVarC2: number;
   baselineC: number;
@@ -75,7 +78,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     state: 'cold', stateSinceS: NaN, stallReason: null, faultReason: null, preFaultState: 'cold',
     firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
     intervalS: NaN, recoverCount: 0,
-    spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30),
+    spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30), slowJumpCPerS: NaN,
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,

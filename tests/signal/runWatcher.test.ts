@@ -95,6 +95,23 @@ describe('RunWatcher', () => {
     expect(events[2]!.timeS).toBeLessThan(2160 + 360);
   });
 
+  it('typed readings on a climb of 3-4 degC a reading are no plateau: the jump that restarts the slow fit is its slope', () => {
+    // Shaped demo: a plateau at 60 degC for 20 min, then a 16 min climb to 100 degC (2.5 degC/min
+    // on average, 3.75 at its steepest), read by hand every 1-2 minutes in whole degrees. Most
+    // readings on the climb are over 3 degC from the last and restart the slow fit; a fit of one
+    // reading has no slope, and taken as 0 it once called the climb steady and declared a
+    // plateau on it.
+    const climb: SyntheticProfile = { roomC: 21, vapourArrivalS: 300, arrivalTauS: 8, plateaus: [{ levelC: 60, durationS: 1200, riseS: 960 }, { levelC: 100, durationS: 1500 }] };
+    const profile = syntheticTruth(climb);
+    for (const seed of [1, 2, 3, 4, 5, 6]) {
+      const hand = handReadings(profile.timeS, profile.headC, { seed, roundToC: 1 });
+      const events = analyzeReadings(hand.timeS, hand.headC);
+      const plateaus = events.filter((e) => e.kind === 'plateau');
+      expect(plateaus.every((p) => Math.abs(p.headC - 60) < 1.5 || Math.abs(p.headC - 100) < 1.5)).toBe(true);
+      expect(events.filter((e) => e.kind === 'breakthrough')).toHaveLength(1);
+    }
+  });
+
   it('readings quantised to whole degrees at 2 s still find both plateaus within 1 degC', () => {
     const r = read({ intervalS: 2, quantumC: 1, noiseSdC: 0.05 });
     const plateaus = analyzeReadings(r.timeS, r.headC).filter((e) => e.kind === 'plateau');
