@@ -12,6 +12,9 @@ export interface EventSink {
 
 /** Room baseline follows slow warming of the head with this time constant. Units: s. */
 const BASELINE_TAU_S = 300;
+/** A first reading this warm is not room temperature: laboratories are kept well below it
+ * (common practice: about 18-25 degC). Units: degC. */
+const HOT_START_C = 40;
 /** The plateau level is the mean of its readings within 0.9 degC of it (short of the 1 degC
  * deadband, so sags and rises stay out), as the truth's level is the median of the whole steady
  * stretch; after an hour or so it turns into a follower of a long plateau's creep, with this time
@@ -117,8 +120,11 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
 }
 
 function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
+  // A first reading hotter than any room: the run was already under way when the watching began
+  // (the app opened mid-run, or the first typed reading taken after the vapour came).
+  const isHotStart = Number.isNaN(s.baselineC) && valueC >= HOT_START_C;
   if (Number.isNaN(s.baselineC)) s.baselineC = valueC;
-  if (valueC - s.baselineC >= s.options.vapourRiseC) {
+  if (isHotStart || valueC - s.baselineC >= s.options.vapourRiseC) {
     s.vapourTimeS = timeS;
     s.stallReason = null;
     s.peakC = valueC;

@@ -168,6 +168,21 @@ describe('RunWatcher', () => {
     expect(stalls.map((s) => s.reason)).toEqual(['creeping']);
   });
 
+  it('a trace that starts hot (watching begun mid-run) has vapour at its first reading; one that starts in a warm room does not', () => {
+    // The two-cut demo from 30 min in (on the first plateau, 56 degC), read each second.
+    const r = read({});
+    const from = r.timeS.findIndex((t) => t >= 1800);
+    const events = analyzeReadings(r.timeS.subarray(from), r.headC.subarray(from));
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau']);
+    expect(events[0]!.timeS).toBe(r.timeS[from]);
+    expect(events.some((e) => e.kind === 'stall')).toBe(false);
+    // A room at 32 degC is warm, but a room: no vapour until the head rises from it.
+    const warm = read({}, syntheticTruth({ ...twoCuts, roomC: 32 }));
+    const first = analyzeReadings(warm.timeS, warm.headC)[0]!;
+    expect(first.kind).toBe('vapour');
+    expect(first.timeS).toBeGreaterThanOrEqual(600);
+  });
+
   it('readings at or before the last one are ignored', () => {
     const w = new RunWatcher();
     w.push(10, 21);
