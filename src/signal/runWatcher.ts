@@ -181,6 +181,9 @@ export class RunWatcher {
         s.innovationVarC2 = Number.isNaN(s.innovationVarC2) ? e2 : s.innovationVarC2 + 0.02 * (e2 - s.innovationVarC2);
       }
     }
+    const stepC = Math.abs(valueC - (s.lastAcceptedC ?? Number.NaN));
+    if (stepC > 0 && !(stepC >= (s.resolutionC ?? Number.NaN))) s.resolutionC = stepC;
+    s.lastAcceptedC = valueC;
     ewRegressionAdd(s.fast, timeS, valueC);
     // After a clear change of course the old readings only bias the slope that says "steady".
     if (s.slow.w > 0 && Math.abs(valueC - ewRegressionLevel(s.slow)) > SLOW_RESTART_C) restartSlowFit(s, timeS, valueC, dtS);

@@ -24,6 +24,11 @@ export interface WatcherState {
   latestInvalid: InvalidReason | null;
   /** Running mean time between readings. Units: s. */
   intervalS: number;
+  /** The last reading accepted, and the smallest change ever seen between two accepted in a
+   * row: the readings' resolution (0.25 degC boards, whole degrees typed). Absent in older
+   * saves. Units: degC. */
+  lastAcceptedC?: number;
+  resolutionC?: number;
   recoverCount: number;
   spikes: SpikeFilter;
   fast: EwRegression;
@@ -77,7 +82,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     version: 1, options, plan, expectedPlateaus,
     state: 'cold', stateSinceS: NaN, stallReason: null, faultReason: null, preFaultState: 'cold',
     firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
-    intervalS: NaN, recoverCount: 0,
+    intervalS: NaN, lastAcceptedC: NaN, resolutionC: NaN, recoverCount: 0,
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30), slowJumpCPerS: NaN,
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
