@@ -83,12 +83,15 @@ export class RunWatcher {
     }
     const gapS = timeS - s.lastValidS;
     s.lastValidS = timeS;
+    const stepC = Math.abs(headC - (s.lastValidC ?? Number.NaN));
+    if (stepC > 0 && !(stepC >= (s.resolutionC ?? Number.NaN))) s.resolutionC = stepC;
+    s.lastValidC = headC;
     const isHand = s.intervalS >= s.options.handIntervalS;
     // Typed readings repeat whenever the thermometer does: only an instrument can be stuck.
     if (!isHand) {
       s.stuck ??= createStuckReadings();
       const climbCPerS = ewRegressionSlope(s.fast);
-      if (pushStuckReading(s.stuck, timeS, headC, s.state, climbCPerS)) {
+      if (pushStuckReading(s.stuck, timeS, headC, s.state, s.resolutionC ?? Number.NaN, climbCPerS)) {
         this.enterFault(timeS, 'stuck', headC);
         return this.events;
       }
@@ -181,9 +184,6 @@ export class RunWatcher {
         s.innovationVarC2 = Number.isNaN(s.innovationVarC2) ? e2 : s.innovationVarC2 + 0.02 * (e2 - s.innovationVarC2);
       }
     }
-    const stepC = Math.abs(valueC - (s.lastAcceptedC ?? Number.NaN));
-    if (stepC > 0 && !(stepC >= (s.resolutionC ?? Number.NaN))) s.resolutionC = stepC;
-    s.lastAcceptedC = valueC;
     ewRegressionAdd(s.fast, timeS, valueC);
     // After a clear change of course the old readings only bias the slope that says "steady".
     if (s.slow.w > 0 && Math.abs(valueC - ewRegressionLevel(s.slow)) > SLOW_RESTART_C) restartSlowFit(s, timeS, valueC, dtS);

@@ -2,7 +2,7 @@ import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
 import { holdsLevel, isOutsideExpected, windowIndexAt } from './cutPlan.ts';
 import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewRegressionSlope, restartEwRegression, type EwRegression } from './ewRegression.ts';
 import type { EventKind, FaultReason, PlateauReason, StallReason, WatchState } from './types.ts';
-import type { WatcherState } from './watcherState.ts';
+import { noClimbSag, type WatcherState } from './watcherState.ts';
 
 /** Where the state machine raises events and changes state (the watcher). */
 export interface EventSink {
@@ -218,7 +218,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.plateauCandidateS = NaN;
   s.hasRaisedCreep = false;
   s.creepSinceS = NaN;
-  s.climbSag = { fromC: NaN, atS: NaN, belowSinceS: NaN };
+  s.climbSag = noClimbSag();
   s.stallReason = null;
   sink.setState('plateau', timeS);
   let receiver: number | undefined;
@@ -344,7 +344,7 @@ function raiseBreakthrough(s: WatcherState, timeS: number, levelC: number, fastC
 function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: number, sink: EventSink): boolean {
   if (!Number.isFinite(s.levelC)) return false;
   // States saved before the sag existed carry none: it starts here then.
-  const sag = (s.climbSag ??= { fromC: NaN, atS: NaN, belowSinceS: NaN });
+  const sag = (s.climbSag ??= noClimbSag());
   if (Number.isNaN(sag.fromC)) {
     if (!(fastC < s.peakC - CLIMB_SAG_C)) {
       sag.belowSinceS = NaN;
@@ -384,7 +384,7 @@ function plateauCourseC(course: EwRegression, timeS: number, levelC: number, fla
 
 function fallAway(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
   s.troughC = fastC;
-  s.climbSag = { fromC: NaN, atS: NaN, belowSinceS: NaN };
+  s.climbSag = noClimbSag();
   s.fallSinceS = NaN;
   s.sagSinceS = NaN;
   sink.setState('stalled', timeS);

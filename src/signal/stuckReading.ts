@@ -25,8 +25,6 @@ export interface StuckReadings {
   count: number;
   /** The noise when the run began, from this stretch's readings (the quiet run cannot lower it). Units: degC. */
   sigmaC: number;
-  /** The smallest step between two readings ever seen: the sensor's resolution. Units: degC. */
-  quantumC: number;
   /** Times the value has changed in this stretch: the sensor has shown that it wavers here. */
   changes: number;
   /** Sum of squared steps between readings in this stretch, and their number. Units: degC^2. */
@@ -57,7 +55,7 @@ const CLIMB_MIN_C_PER_S = 0.1;
 const CLIMB_STEPS = 8;
 
 export function createStuckReadings(): StuckReadings {
-  return { state: '', valueC: Number.NaN, sinceS: Number.NaN, count: 0, sigmaC: Number.NaN, quantumC: Number.NaN, changes: 0, stepSquares: 0, steps: 0, climbCPerS: Number.NaN, runSigmaC: Number.NaN };
+  return { state: '', valueC: Number.NaN, sinceS: Number.NaN, count: 0, sigmaC: Number.NaN, changes: 0, stepSquares: 0, steps: 0, climbCPerS: Number.NaN, runSigmaC: Number.NaN };
 }
 
 // Abramowitz and Stegun 7.1.26 (error below 1.5e-7), enough for a run-length threshold.
@@ -76,7 +74,8 @@ export function stuckRunLength(sigmaC: number, quantumC: number, odds = ODDS): n
 }
 
 /**
- * One valid reading, in watcher state `state`, with the head's climb rate as the watcher last
+ * One valid reading, in watcher state `state`, with the readings' resolution (`quantumC`, the
+ * smallest change the watcher has seen between two) and the head's climb rate as the watcher last
  * saw it (`climbCPerS`). On a plateau the run is judged against the noise, measured on the
  * plateau itself (a climb's steps and its rounding look like noise and would make a quiet
  * plateau look frozen), where a frozen reading would hide the breakthrough; while leaving a
@@ -85,7 +84,7 @@ export function stuckRunLength(sigmaC: number, quantumC: number, odds = ODDS): n
  * correlated over a second or so): on a plateau the run must also last a second for each
  * reading the test asks for.
  */
-export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string, climbCPerS = Number.NaN): boolean {
+export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string, quantumC: number, climbCPerS = Number.NaN): boolean {
   if (state !== t.state) {
     t.state = state;
     t.changes = 0;
@@ -95,7 +94,6 @@ export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number
   if (valueC !== t.valueC) {
     if (Number.isFinite(t.valueC)) {
       const step = Math.abs(valueC - t.valueC);
-      if (!(step >= t.quantumC)) t.quantumC = step;
       if (step <= NOISE_STEP_MAX_C) {
         t.changes++;
         t.stepSquares += step * step;
@@ -119,13 +117,13 @@ export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number
   if (state === 'rising') return false;
   if (state === 'leaving') {
     const climb = t.climbCPerS ?? Number.NaN;
-    if (climb >= CLIMB_MIN_C_PER_S && t.quantumC > 0 && t.count >= MIN_READINGS && stillS >= MIN_SECONDS && climb * stillS >= CLIMB_STEPS * t.quantumC) return true;
+    if (climb >= CLIMB_MIN_C_PER_S && quantumC > 0 && t.count >= MIN_READINGS && stillS >= MIN_SECONDS && climb * stillS >= CLIMB_STEPS * quantumC) return true;
   }
   // On the plateau that has shown its noise, by that noise; elsewhere (a board hung as the
   // breakthrough began, which the watcher then follows out of the plateau and onto the frozen
   // value as if it were the next one), by the noise of the plateau the run began on.
   const sigmaC = state === 'plateau' && t.changes >= MIN_CHANGES ? t.sigmaC : (t.runSigmaC ?? Number.NaN);
   if (!Number.isFinite(sigmaC)) return false;
-  const needed = stuckRunLength(sigmaC, t.quantumC);
+  const needed = stuckRunLength(sigmaC, quantumC);
   return t.count >= needed && stillS >= Math.max(MIN_SECONDS, needed - 1);
 }

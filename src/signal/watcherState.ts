@@ -24,10 +24,10 @@ export interface WatcherState {
   latestInvalid: InvalidReason | null;
   /** Running mean time between readings. Units: s. */
   intervalS: number;
-  /** The last reading accepted, and the smallest change ever seen between two accepted in a
-   * row: the readings' resolution (0.25 degC boards, whole degrees typed). Absent in older
-   * saves. Units: degC. */
-  lastAcceptedC?: number;
+  /** The last valid reading, and the smallest change ever seen between two valid in a row: the
+   * readings' resolution (0.25 degC boards, whole degrees typed), for the stuck test and the
+   * plateau level. Absent in older saves. Units: degC. */
+  lastValidC?: number;
   resolutionC?: number;
   recoverCount: number;
   spikes: SpikeFilter;
@@ -66,7 +66,7 @@ export interface WatcherState {
   /** A sag in a climb (climbSag in stateMachine.ts): the peak it fell from, when it was
    * confirmed, and since when the head has been below that peak by a sag's depth. NaN: none.
    * Absent in states saved before it existed. Units: degC, s. */
-  climbSag?: { fromC: number; atS: number; belowSinceS: number };
+  climbSag?: ClimbSag;
   /** The run of identical readings (stuckReading.ts). Absent in states saved before it existed. */
   stuck?: StuckReadings;
   receiverIndex: number;
@@ -77,16 +77,26 @@ export interface WatcherState {
   lastAlarmS: Partial<Record<EventKind, number>>;
 }
 
+export interface ClimbSag {
+  fromC: number;
+  atS: number;
+  belowSinceS: number;
+}
+
+export function noClimbSag(): ClimbSag {
+  return { fromC: NaN, atS: NaN, belowSinceS: NaN };
+}
+
 export function createWatcherState(options: WatcherOptions, plan: CutWindow[], expectedPlateaus: ExpectedPlateau[] = []): WatcherState {
   return {
     version: 1, options, plan, expectedPlateaus,
     state: 'cold', stateSinceS: NaN, stallReason: null, faultReason: null, preFaultState: 'cold',
     firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
-    intervalS: NaN, lastAcceptedC: NaN, resolutionC: NaN, recoverCount: 0,
+    intervalS: NaN, lastValidC: NaN, resolutionC: NaN, recoverCount: 0,
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30), slowJumpCPerS: NaN,
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: { fromC: NaN, atS: NaN, belowSinceS: NaN }, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
   };
 }
