@@ -61,6 +61,23 @@ export function ewRegressionEffectiveReadings(r: EwRegression): number {
 }
 const LEVEL_EFFECTIVE_PER_WEIGHT = 0.81;
 
+/**
+ * Standard deviation of the fitted slope per unit of white reading noise, for readings every
+ * `intervalS` once the fit spans several time constants: with weights q^k (q = e^(-interval/tau),
+ * k readings back) the slope's variance is sigma^2 sum q^2k (k - kbar)^2 / (interval^2 (sum q^k
+ * (k - kbar)^2)^2), kbar the weighted mean of k, in closed form from the geometric sums
+ * sum q^k = 1/(1-q), sum k q^k = q/(1-q)^2, sum k^2 q^k = q(1+q)/(1-q)^3. Units: 1/s.
+ */
+export function ewSlopeNoisePerSd(tauS: number, intervalS: number): number {
+  const q = Math.exp(-intervalS / tauS), p = q * q;
+  const s0 = 1 / (1 - q), s1 = q * s0 * s0, s2 = q * (1 + q) * s0 * s0 * s0;
+  const u0 = 1 / (1 - p), u1 = p * u0 * u0, u2 = p * (1 + p) * u0 * u0 * u0;
+  const meanK = s1 / s0;
+  const spread = s2 - 2 * meanK * s1 + meanK * meanK * s0;
+  const spreadSquared = u2 - 2 * meanK * u1 + meanK * meanK * u0;
+  return Math.sqrt(spreadSquared) / (intervalS * spread);
+}
+
 /** Weighted mean, with no trend correction (lags a ramp, ignores nothing). Units: degC. */
 export function ewRegressionMean(r: EwRegression): number {
   return r.w > 0 ? r.y / r.w : NaN;

@@ -349,6 +349,21 @@ describe('RunWatcher breakthrough timing', () => {
     }
   });
 
+  it('a board with 0.5 degC noise read every 5 s on a flat plateau raises no breakthrough (slope noise counted from the reading noise)', () => {
+    // Invented plateau. At 5 s the fast fit holds about two readings, and the readings the wander band
+    // about the level lets through are the quiet ones: their slope power alone read the slope
+    // noise several times too small, and a noise peak passed for a steep climb (2 false
+    // breakthroughs in these 20 seeds before).
+    let breakthroughs = 0;
+    for (let seed = 1; seed <= 20; seed++) {
+      const timeS = Float64Array.from({ length: 3001 }, (_, i) => i);
+      const truthC = (t: number): number => (t < 300 ? 20 : t < 320 ? 20 + (t - 300) * 2.65 : 73 + 0.0001 * (t - 320));
+      const r = sensorReadings(timeS, timeS.map(truthC), { seed, intervalS: 5, noiseSdC: 0.5, quantumC: 0.25, lagTauS: 1 });
+      breakthroughs += analyzeReadings(r.timeS, r.headC).filter((e) => e.kind === 'breakthrough').length;
+    }
+    expect(breakthroughs).toBe(0);
+  });
+
   it('a state saved before the plateau course existed resumes and still finds the breakthrough', () => {
     const { timeS, headC } = through([[0, 20], [300, 20], [320, 80], [1500, 80.1], [1560, 92], [2400, 92.1]]);
     let w = new RunWatcher();
