@@ -38,7 +38,7 @@ const CLIMB_SLOPE_SDS = 6;
  * times too small, and a noise peak passed for a climb. A share, not all of it: the reading noise
  * is taken from the innovations, which also hold the fit's own prediction error (1.3-2 times the
  * noise's variance at readings 1-5 s apart); in full it delayed sharp breakthroughs (synthetic
- * corpus, readings every 2 s or faster: latency p90 19.4 -> 25.3 s), at a half not. */
+ * corpus, readings every 2 s or faster: latency p90 19.8 -> 25.8 s), at a half hardly. */
 const WHITE_SLOPE_FLOOR = 0.5;
 /** The smoothed head's variance about the level is averaged over this time. Units: s. */
 const RESIDUAL_POWER_TAU_S = 600;
