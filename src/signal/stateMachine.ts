@@ -295,7 +295,11 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
   const whiteSlopeSdCPerS = Math.sqrt(Number.isNaN(s.innovationVarC2) ? 0 : s.innovationVarC2) * ewSlopeNoisePerSd(s.fast.tauS, s.intervalS);
   const slopeSdCPerS = Math.max(Math.sqrt(s.fastSlopePowerC2PerS2 ?? NaN), WHITE_SLOPE_FLOOR * whiteSlopeSdCPerS);
   const isClimbing = Number.isFinite(slopeSdCPerS) && ewRegressionSlope(s.fast) >= CLIMB_FACTOR * o.flatSlopeCPerS + CLIMB_SLOPE_SDS * slopeSdCPerS;
-  if ((s.cusumCS >= thresholdCS || isClimbing) && fastC - s.levelC >= o.breakthroughMinRiseC) {
+  // The rise past the deadband is the lesser of the fast fit and the reading, as for the peak
+  // (watchRising): a fit of few readings, typed ones above all, extrapolates its slope past the
+  // last reading (a whole-degree reading of 53 read as 53.9, the plateau at 52.1).
+  const riseC = Math.min(fastC, valueC) - s.levelC;
+  if ((s.cusumCS >= thresholdCS || isClimbing) && riseC >= o.breakthroughMinRiseC) {
     s.peakC = fastC;
     s.plateauCandidateS = NaN;
     s.fallSinceS = NaN;

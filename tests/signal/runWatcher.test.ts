@@ -112,6 +112,16 @@ describe('RunWatcher', () => {
     }
   });
 
+  it('typed whole-degree readings: one degree up from a plateau at 52.1 is no breakthrough, two are', () => {
+    // Invented typed run, a reading every 84-98 s. The fast fit of so few readings carries its
+    // slope past the last one (the 53 read as 53.4): the rise is the lesser of fit and reading.
+    const readings = [22, 22, 51, 52, 52, 52, 52, 52, 53, 54, 55, 57];
+    const timeS = Float64Array.from(readings, (_, i) => 60 + i * 84 + (i % 3) * 7);
+    const events = analyzeReadings(timeS, Float64Array.from(readings));
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough']);
+    expect(events[2]!.timeS).toBe(timeS[9]);
+  });
+
   it('readings quantised to whole degrees at 2 s still find both plateaus within 1 degC', () => {
     const r = read({ intervalS: 2, quantumC: 1, noiseSdC: 0.05 });
     const plateaus = analyzeReadings(r.timeS, r.headC).filter((e) => e.kind === 'plateau');
