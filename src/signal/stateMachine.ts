@@ -91,6 +91,15 @@ const PLATEAU_HOLD_INTERVALS = 2;
 const CLIMB_SAG_C = 0.8;
 const CLIMB_SAG_HOLD_S = 10;
 const CLIMB_SAG_WITHIN_S = 180;
+/** Two typed readings this close agree (watchTypedPair): half a degree, what a thermometer
+ * graduated in degrees is read to by eye; and the reading step counted on top of the deadband,
+ * at most a degree (the resolution estimate of a run's first readings can be the whole vapour
+ * jump). Chosen on the simulated corpus: a pair within a step instead (whole degrees: 72, 73)
+ * found the same breakthroughs with two false alarms more; twice the step on top, one
+ * breakthrough and one false alarm fewer.
+ * Units: degC. */
+const TYPED_PAIR_C = 0.5;
+const TYPED_STEP_MAX_C = 1;
 
 /** One reading that passed the spike filter; the filters have already taken it. */
 export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
@@ -146,6 +155,8 @@ function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: num
     s.peakC = valueC;
     s.plateauCandidateS = NaN;
     s.fallSinceS = NaN;
+    s.typedPrevC = valueC;
+    s.typedPairC = NaN;
     sink.setState('rising', timeS);
     // Room-temperature readings would hold the slope up long after the head has settled.
     restartSlowFit(s, timeS, valueC, dtS);
@@ -158,6 +169,7 @@ function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: num
 
 function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: number, sink: EventSink): void {
   const o = s.options;
+  if (s.state !== 'stalled' && watchTypedPair(s, timeS, valueC, sink)) return;
   // The fast local-linear fit overshoots where a steep climb stops (by about slope x tau: 10
   // degC after vapour arrives in a few seconds); the reading itself does not. The lesser of the
   // two has neither the overshoot nor the noise peaks, so a fall is measured from a real top.
@@ -184,6 +196,34 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
     s.stallReason = 'creeping';
     sink.emit(timeS, 'stall', fastC, 'creeping');
   }
+}
+
+/**
+ * Typed readings: a component whose cut lasts two readings (two or three minutes) is never held
+ * long enough to be declared a plateau, yet two readings that agree and a next one a
+ * breakthrough's rise above them is what the one typing sees as a cut: steady, then leaving.
+ * Two agree within TYPED_PAIR_C (whole-degree readings only when equal: a climb of a degree a
+ * reading is no pair); the rise is the deadband and one reading step more. The plateau rules
+ * apply: none within a pause of the last breakthrough's level (two readings are always short),
+ * off a mixed level or off the last one. Returns whether it raised one.
+ */
+function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: EventSink): boolean {
+  if (!(s.intervalS >= s.options.handIntervalS)) {
+    s.typedPrevC = NaN;
+    s.typedPairC = NaN;
+    return false;
+  }
+  const previousC = s.typedPrevC ?? NaN;
+  const pairC = s.typedPairC ?? NaN;
+  s.typedPrevC = valueC;
+  s.typedPairC = Math.abs(valueC - previousC) <= TYPED_PAIR_C ? (valueC + previousC) / 2 : NaN;
+  // One reading step more than the deadband: a typed reading a step up may be rounding only.
+  const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
+  if (!(valueC >= pairC + s.options.breakthroughMinRiseC + stepC)) return false;
+  s.typedPairC = NaN;
+  if (pairC < (s.brokeFromC ?? NaN) + PAUSE_C || isMixedLevel(s, pairC) || isLastLevel(s, pairC)) return false;
+  raiseBreakthrough(s, timeS, pairC, valueC, sink);
+  return true;
 }
 
 /**
@@ -227,6 +267,8 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.hasRaisedCreep = false;
   s.creepSinceS = NaN;
   s.climbSag = noClimbSag();
+  s.typedPrevC = NaN;
+  s.typedPairC = NaN;
   s.stallReason = null;
   sink.setState('plateau', timeS);
   let receiver: number | undefined;

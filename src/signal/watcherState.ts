@@ -67,6 +67,10 @@ export interface WatcherState {
    * confirmed, and since when the head has been below that peak by a sag's depth. NaN: none.
    * Absent in states saved before it existed. Units: degC, s. */
   climbSag?: ClimbSag;
+  /** Typed readings while climbing (watchTypedPair in stateMachine.ts): the last one, and the
+   * mean of the last two when they agreed (NaN: they did not). Absent in older saves. Units: degC. */
+  typedPrevC?: number;
+  typedPairC?: number;
   /** The run of identical readings (stuckReading.ts). Absent in states saved before it existed. */
   stuck?: StuckReadings;
   receiverIndex: number;
@@ -97,6 +101,6 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), typedPrevC: NaN, typedPairC: NaN, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
   };
 }

@@ -122,6 +122,27 @@ describe('RunWatcher', () => {
     expect(events[2]!.timeS).toBe(timeS[9]);
   });
 
+  describe('a cut two typed readings long', () => {
+    // Invented typed runs, a reading every 90-101 s.
+    const typed = (readings: number[]): WatchEvent[] =>
+      analyzeReadings(Float64Array.from(readings, (_, i) => 30 + i * 90 + (i % 2) * 11), Float64Array.from(readings));
+    it('two agreeing readings and a jump above them is a breakthrough, though never held as a plateau', () => {
+      const events = typed([19.5, 19.5, 55.0, 55.5, 91.5, 99.5, 99.0, 99.5, 99.0]);
+      expect(kinds(events).slice(0, 2)).toEqual(['vapour', 'breakthrough']);
+      expect(events[1]!.headC).toBe(91.5);
+    });
+    it('a climb of a degree or two a reading, in whole degrees, has no pair: no breakthrough', () => {
+      expect(kinds(typed([21, 21, 60, 62, 64, 66, 68, 69, 71, 72, 74, 75, 77]))).toEqual(['vapour']);
+    });
+    it('a pair within a pause of the last breakthrough is the same climb; far above it, the next cut', () => {
+      const near = typed([21, 21, 52, 52, 52, 52, 52, 54, 56, 56, 58, 70, 80]);
+      expect(kinds(near)).toEqual(['vapour', 'plateau', 'breakthrough']);
+      const far = typed([21, 21, 52, 52, 52, 52, 52, 54, 66, 66, 69, 80, 90]);
+      expect(kinds(far)).toEqual(['vapour', 'plateau', 'breakthrough', 'breakthrough']);
+      expect(far[3]!.headC).toBe(69);
+    });
+  });
+
   it('readings quantised to whole degrees at 2 s still find both plateaus within 1 degC', () => {
     const r = read({ intervalS: 2, quantumC: 1, noiseSdC: 0.05 });
     const plateaus = analyzeReadings(r.timeS, r.headC).filter((e) => e.kind === 'plateau');
