@@ -62,20 +62,33 @@ export function ewRegressionEffectiveReadings(r: EwRegression): number {
 const LEVEL_EFFECTIVE_PER_WEIGHT = 0.81;
 
 /**
- * Standard deviation of the fitted slope per unit of white reading noise, for readings every
- * `intervalS` once the fit spans several time constants: with weights q^k (q = e^(-interval/tau),
- * k readings back) the slope's variance is sigma^2 sum q^2k (k - kbar)^2 / (interval^2 (sum q^k
- * (k - kbar)^2)^2), kbar the weighted mean of k, in closed form from the geometric sums
- * sum q^k = 1/(1-q), sum k q^k = q/(1-q)^2, sum k^2 q^k = q(1+q)/(1-q)^3. Units: 1/s.
+ * Standard deviations of the fitted level and slope per unit of white reading noise, for
+ * readings every `intervalS` once the fit spans several time constants. With weights q^k
+ * (q = e^(-interval/tau), k readings back) the estimates' covariance is sigma^2 M^-1 N M^-1
+ * (weighted least squares), M and N the weighted and squared-weighted moment matrices of k,
+ * in closed form from the geometric sums sum r^k = 1/(1-r), sum k r^k = r/(1-r)^2,
+ * sum k^2 r^k = r(1+r)/(1-r)^3 with r = q and q^2. Units: 1 (level), 1/s (slope).
  */
+export function ewLevelNoisePerSd(tauS: number, intervalS: number): number {
+  fitNoise(tauS, intervalS);
+  return Math.sqrt(noise[0]!);
+}
 export function ewSlopeNoisePerSd(tauS: number, intervalS: number): number {
+  fitNoise(tauS, intervalS);
+  return Math.sqrt(noise[1]!) / intervalS;
+}
+
+/** Level and slope (per reading interval) variances into `noise`: no allocation per reading. */
+const noise = new Float64Array(2);
+function fitNoise(tauS: number, intervalS: number): void {
   const q = Math.exp(-intervalS / tauS), p = q * q;
   const s0 = 1 / (1 - q), s1 = q * s0 * s0, s2 = q * (1 + q) * s0 * s0 * s0;
   const u0 = 1 / (1 - p), u1 = p * u0 * u0, u2 = p * (1 + p) * u0 * u0 * u0;
-  const meanK = s1 / s0;
-  const spread = s2 - 2 * meanK * s1 + meanK * meanK * s0;
-  const spreadSquared = u2 - 2 * meanK * u1 + meanK * meanK * u0;
-  return Math.sqrt(spreadSquared) / (intervalS * spread);
+  // The line y = a + b x with x = -k (the latest reading at x = 0): M = [[s0, -s1], [-s1, s2]],
+  // N = [[u0, -u1], [-u1, u2]], M^-1 = [[s2, s1], [s1, s0]] / det.
+  const det2 = (s0 * s2 - s1 * s1) ** 2;
+  noise[0] = (s2 * s2 * u0 - 2 * s1 * s2 * u1 + s1 * s1 * u2) / det2;
+  noise[1] = (s1 * s1 * u0 - 2 * s0 * s1 * u1 + s0 * s0 * u2) / det2;
 }
 
 /** Weighted mean, with no trend correction (lags a ramp, ignores nothing). Units: degC. */

@@ -1,6 +1,6 @@
 import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
 import { holdsLevel, isOutsideExpected, windowIndexAt } from './cutPlan.ts';
-import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewRegressionSlope, ewSlopeNoisePerSd, restartEwRegression, type EwRegression } from './ewRegression.ts';
+import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewRegressionSlope, ewLevelNoisePerSd, ewSlopeNoisePerSd, restartEwRegression, type EwRegression } from './ewRegression.ts';
 import type { EventKind, FaultReason, PlateauReason, StallReason, WatchState } from './types.ts';
 import { noClimbSag, type WatcherState } from './watcherState.ts';
 
@@ -89,6 +89,10 @@ const PLATEAU_HOLD_INTERVALS = 2;
  * a breakthrough's rise above that peak within 3 minutes. The issue's pre-cut sag is 1-3 degC;
  * the depth is measured on the fast fit, which rounds a short sag's bottom off. Units: degC, s. */
 const CLIMB_SAG_C = 0.8;
+/** ... and never shallower than this many standard deviations of the fast level's noise: on a
+ * 0.5 degC board read every 2 s that noise is 0.35-0.45 degC, and a climb pausing a minute gave a
+ * noise "sag" (4 of 20 seeds in the tests' shape; none at 3 sd, the real sags still found). */
+const CLIMB_SAG_NOISE_SDS = 3;
 const CLIMB_SAG_HOLD_S = 10;
 const CLIMB_SAG_WITHIN_S = 180;
 /** Two typed readings this close agree (watchTypedPair): half a degree, what a thermometer
@@ -334,7 +338,7 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
   // Past the deadband, a climb far steeper than any plateau creep needs no more evidence (two
   // detectors: the CUSUM on the level for slow rises, the fast slope for sharp ones). The slope's
   // noise is never taken below a share of what the reading noise alone gives the fast fit.
-  const whiteSlopeSdCPerS = Math.sqrt(Number.isNaN(s.innovationVarC2) ? 0 : s.innovationVarC2) * ewSlopeNoisePerSd(s.fast.tauS, s.intervalS);
+  const whiteSlopeSdCPerS = readingNoiseC(s) * ewSlopeNoisePerSd(s.fast.tauS, s.intervalS);
   const slopeSdCPerS = Math.max(Math.sqrt(s.fastSlopePowerC2PerS2 ?? NaN), WHITE_SLOPE_FLOOR * whiteSlopeSdCPerS);
   const isClimbing = Number.isFinite(slopeSdCPerS) && ewRegressionSlope(s.fast) >= CLIMB_FACTOR * o.flatSlopeCPerS + CLIMB_SLOPE_SDS * slopeSdCPerS;
   // The rise past the deadband is the lesser of the fast fit and the reading, as for the peak
@@ -402,7 +406,8 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
   // States saved before the sag existed carry none: it starts here then.
   const sag = (s.climbSag ??= noClimbSag());
   if (Number.isNaN(sag.fromC)) {
-    if (!(fastC < s.peakC - CLIMB_SAG_C)) {
+    const depthC = Math.max(CLIMB_SAG_C, CLIMB_SAG_NOISE_SDS * readingNoiseC(s) * ewLevelNoisePerSd(s.fast.tauS, s.intervalS));
+    if (!(fastC < s.peakC - depthC)) {
       sag.belowSinceS = NaN;
       return false;
     }
@@ -424,6 +429,11 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
   if (levelC < (s.brokeFromC ?? NaN) + SHOULDER_C || isMixedLevel(s, levelC) || isLastLevel(s, levelC)) return false;
   raiseBreakthrough(s, timeS, levelC, fastC, sink);
   return true;
+}
+
+/** The reading noise as the innovations of the fast fit give it (0 before any). Units: degC. */
+function readingNoiseC(s: WatcherState): number {
+  return Number.isNaN(s.innovationVarC2) ? 0 : Math.sqrt(s.innovationVarC2);
 }
 
 /**

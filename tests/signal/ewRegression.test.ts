@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewRegressionSlope, ewSlopeNoisePerSd, restartEwRegression } from '../../src/signal/ewRegression.ts';
+import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewLevelNoisePerSd, ewRegressionSlope, ewSlopeNoisePerSd, restartEwRegression } from '../../src/signal/ewRegression.ts';
 import { createRandom } from '../../src/science/sensorModel/index.ts';
 
 describe('ewRegression', () => {
@@ -42,23 +42,28 @@ describe('ewRegression', () => {
     expect((sum2 / 4000) * n).toBeGreaterThan(0.95);
     expect((sum2 / 4000) * n).toBeLessThan(1.05);
   });
-  it('ewSlopeNoisePerSd: the fitted slope on white noise has that standard deviation per unit noise', () => {
-    // Simulation of the closed form, 100,000 unit-variance readings each: a fast fit barely
+  it('ewLevelNoisePerSd, ewSlopeNoisePerSd: the fitted level and slope on white noise have those standard deviations per unit noise', () => {
+    // Simulation of the closed forms, 100,000 unit-variance readings each: a fast fit barely
     // longer than the interval (tau 7.5 s, readings every 5 s) and a long one (30 s, every 2 s).
     for (const [tauS, intervalS] of [[7.5, 5], [30, 2]] as const) {
       const random = createRandom(5);
       const r = createEwRegression(tauS);
-      let sum2 = 0, n = 0;
+      let slope2 = 0, level2 = 0, n = 0;
       for (let i = 0; i < 100_000; i++) {
         ewRegressionAdd(r, i * intervalS, random.normal());
-        if (i >= 200) { sum2 += ewRegressionSlope(r) ** 2; n++; }
+        if (i >= 200) { slope2 += ewRegressionSlope(r) ** 2; level2 += ewRegressionLevel(r) ** 2; n++; }
       }
-      // Successive slopes are correlated (over about tau), so the sample is worth fewer draws: 5 %.
-      expect(Math.sqrt(sum2 / n) / ewSlopeNoisePerSd(tauS, intervalS)).toBeGreaterThan(0.95);
-      expect(Math.sqrt(sum2 / n) / ewSlopeNoisePerSd(tauS, intervalS)).toBeLessThan(1.05);
+      // Successive fits are correlated (over about tau), so the sample is worth fewer draws: 5 %.
+      expect(Math.sqrt(slope2 / n) / ewSlopeNoisePerSd(tauS, intervalS)).toBeGreaterThan(0.95);
+      expect(Math.sqrt(slope2 / n) / ewSlopeNoisePerSd(tauS, intervalS)).toBeLessThan(1.05);
+      expect(Math.sqrt(level2 / n) / ewLevelNoisePerSd(tauS, intervalS)).toBeGreaterThan(0.95);
+      expect(Math.sqrt(level2 / n) / ewLevelNoisePerSd(tauS, intervalS)).toBeLessThan(1.05);
     }
-    // Readings packed far closer than tau: the continuous limit 0.5 sqrt(interval / tau^3) (the
-    // integrals of e^(-2u) (u - 1)^2 and e^(-u) (u - 1)^2 over u >= 0 are 1/4 and 1).
+    // Readings packed far closer than tau: the continuous limits, slope 0.5 sqrt(interval /
+    // tau^3) and level sqrt(1.25 interval / tau) (the integrals over u >= 0 of e^(-2u) (u - 1)^2,
+    // e^(-u) (u - 1)^2 and e^(-2u) (2 - u)^2, worked by hand: 1/4, 1 and 5/4, with the level's
+    // weights 2 - u from the inverse moment matrix).
     expect(ewSlopeNoisePerSd(60, 0.1) / (0.5 * Math.sqrt(0.1 / 60 ** 3))).toBeCloseTo(1, 2);
+    expect(ewLevelNoisePerSd(60, 0.1) / Math.sqrt((1.25 * 0.1) / 60)).toBeCloseTo(1, 2);
   });
 });

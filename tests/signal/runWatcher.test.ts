@@ -372,10 +372,11 @@ describe('RunWatcher breakthrough timing', () => {
   });
 
   it('a noisy board on the same climb with no sag raises no second breakthrough (noise peaks are no sag)', () => {
-    for (const seed of [5, 6, 7]) {
+    // The sag must be deeper than the fast level's noise (3 sd): at 0.8 degC alone, 4 of these
+    // 20 seeds raised a second breakthrough on the minute's pause at 70 degC.
+    for (let seed = 1; seed <= 20; seed++) {
       const { timeS, headC } = shortCut(0, { intervalS: 2, noiseSdC: 0.5 }, seed);
-      // Up to the next plateau (what a noisy board does once there is not this test's business).
-      const breakthroughs = analyzeReadings(timeS, headC).filter((e) => e.kind === 'breakthrough' && e.timeS < 1700);
+      const breakthroughs = analyzeReadings(timeS, headC).filter((e) => e.kind === 'breakthrough');
       expect(breakthroughs).toHaveLength(1);
     }
   });
