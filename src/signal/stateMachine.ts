@@ -95,6 +95,16 @@ const CLIMB_SAG_C = 0.8;
 const CLIMB_SAG_NOISE_SDS = 3;
 const CLIMB_SAG_HOLD_S = 10;
 const CLIMB_SAG_WITHIN_S = 180;
+/** A knee in a climb (watchClimbKnee): slower than 0.04 degC/s (2.4 degC/min) for a minute, then
+ * within 2 minutes of the stretch's end faster than a breakthrough's 6 degC/min. Chosen on the
+ * simulated corpus of two seeds (20251201 and 7), with the charge known: at 0.03 degC/s one
+ * breakthrough fewer (alone, two). With the stretch at 0.03 degC/s: an exit at 0.06 degC/s made
+ * two false alarms more; a stretch of 40 s changed nothing; a take-off within 1 minute lost one
+ * breakthrough, within 5 minutes one too and made one false alarm. Units: degC/s, s. */
+const KNEE_SLOW_C_PER_S = 0.04;
+const KNEE_EXIT_C_PER_S = 0.1;
+const KNEE_HOLD_S = 60;
+const KNEE_WITHIN_S = 120;
 /** Two typed readings this close agree (watchTypedPair): half a degree, what a thermometer
  * graduated in degrees is read to by eye; and the reading step counted on top of the deadband,
  * at most a degree (the resolution estimate of a run's first readings can be the whole vapour
@@ -192,6 +202,7 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
     return;
   }
   if (s.state !== 'stalled' && watchClimbSag(s, timeS, valueC, fastC, sink)) return;
+  if (s.state !== 'stalled' && watchClimbKnee(s, timeS, valueC, fastC, slopeCPerS, sink)) return;
   // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts.
   if (Number.isNaN(s.creepSinceS) || slopeCPerS > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
   if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS) {
@@ -273,6 +284,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.climbSag = noClimbSag();
   s.typedPrevC = NaN;
   s.typedPairC = NaN;
+  s.kneeSinceS = NaN;
   s.stallReason = null;
   sink.setState('plateau', timeS);
   let receiver: number | undefined;
@@ -431,6 +443,53 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
   return true;
 }
 
+/**
+ * A knee in a climb: a short cut in a column of a few plates, the head slowing to a creep of a
+ * degree or two a minute as a component comes over and never steady enough to be declared a
+ * plateau, then climbing again at a breakthrough's pace with no sag between. A slow stretch
+ * (slow fit under KNEE_SLOW_C_PER_S) held max(KNEE_HOLD_S, two intervals), then the slope past
+ * KNEE_EXIT_C_PER_S with the head (the lesser of fit and reading) a breakthrough's rise above
+ * the stretch's mean, is that cut's breakthrough, its level the mean. Sensor readings only
+ * (typed ones have watchTypedPair), once a plateau has been seen (vapour's arrival slows onto
+ * the first plateau), with the plateau rules: none within a pause of the last breakthrough's
+ * level, off a mixed level or off the last one. Returns whether it raised one.
+ */
+function watchClimbKnee(s: WatcherState, timeS: number, valueC: number, fastC: number, slopeCPerS: number, sink: EventSink): boolean {
+  if (!Number.isFinite(s.levelC) || s.intervalS >= s.options.handIntervalS) return false;
+  // States saved before the knee existed carry none: it starts here then.
+  const sinceS = s.kneeSinceS ?? NaN;
+  if (slopeCPerS < -s.options.flatSlopeCPerS) {
+    // Falling is no creep.
+    s.kneeSinceS = NaN;
+    return false;
+  }
+  if (slopeCPerS <= KNEE_SLOW_C_PER_S) {
+    if (Number.isNaN(sinceS)) {
+      s.kneeSinceS = timeS;
+      s.kneeSumC = 0;
+      s.kneeCount = 0;
+    }
+    s.kneeSumC = (s.kneeSumC ?? 0) + valueC;
+    s.kneeCount = (s.kneeCount ?? 0) + 1;
+    s.kneeEndS = NaN;
+    return false;
+  }
+  if (Number.isNaN(sinceS)) return false;
+  // The stretch has ended: it must have lasted, and the climb must take off soon after.
+  if (Number.isNaN(s.kneeEndS ?? NaN)) s.kneeEndS = timeS;
+  const endS = s.kneeEndS!;
+  if (endS - sinceS < Math.max(KNEE_HOLD_S, 2 * s.intervalS) || timeS - endS > KNEE_WITHIN_S) {
+    s.kneeSinceS = NaN;
+    return false;
+  }
+  const levelC = s.kneeSumC! / s.kneeCount!;
+  if (!(slopeCPerS > KNEE_EXIT_C_PER_S && Math.min(fastC, valueC) >= levelC + s.options.breakthroughMinRiseC)) return false;
+  s.kneeSinceS = NaN;
+  if (levelC < (s.brokeFromC ?? NaN) + PAUSE_C || isMixedLevel(s, levelC) || isLastLevel(s, levelC)) return false;
+  raiseBreakthrough(s, timeS, levelC, fastC, sink);
+  return true;
+}
+
 /** The reading noise as the innovations of the fast fit give it (0 before any). Units: degC. */
 function readingNoiseC(s: WatcherState): number {
   return Number.isNaN(s.innovationVarC2) ? 0 : Math.sqrt(s.innovationVarC2);
@@ -451,6 +510,7 @@ function plateauCourseC(course: EwRegression, timeS: number, levelC: number, fla
 function fallAway(s: WatcherState, timeS: number, fastC: number, sink: EventSink): void {
   s.troughC = fastC;
   s.climbSag = noClimbSag();
+  s.kneeSinceS = NaN;
   s.fallSinceS = NaN;
   s.sagSinceS = NaN;
   sink.setState('stalled', timeS);

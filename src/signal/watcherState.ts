@@ -67,6 +67,13 @@ export interface WatcherState {
    * confirmed, and since when the head has been below that peak by a sag's depth. NaN: none.
    * Absent in states saved before it existed. Units: degC, s. */
   climbSag?: ClimbSag;
+  /** A slow stretch in a climb (watchClimbKnee in stateMachine.ts): since when the climb has
+   * been slow, when it ended (NaN: not yet), and the sum and count of its readings (NaN, 0:
+   * none). Absent in older saves. Units: s, degC. */
+  kneeSinceS?: number;
+  kneeEndS?: number;
+  kneeSumC?: number;
+  kneeCount?: number;
   /** Typed readings while climbing (watchTypedPair in stateMachine.ts): the last one, and the
    * mean of the last two when they agreed (NaN: they did not). Absent in older saves. Units: degC. */
   typedPrevC?: number;
@@ -101,6 +108,6 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), typedPrevC: NaN, typedPairC: NaN, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), typedPrevC: NaN, typedPairC: NaN, kneeSinceS: NaN, kneeEndS: NaN, kneeSumC: 0, kneeCount: 0, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
   };
 }

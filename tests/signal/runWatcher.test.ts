@@ -371,11 +371,29 @@ describe('RunWatcher breakthrough timing', () => {
     }
   });
 
-  it('a noisy board on the same climb with no sag raises no second breakthrough (noise peaks are no sag)', () => {
-    // The sag must be deeper than the fast level's noise (3 sd): at 0.8 degC alone, 4 of these
-    // 20 seeds raised a second breakthrough on the minute's pause at 70 degC.
+  it('the same cut with no sag alarms at the knee, as the climb takes off from its creep', () => {
+    for (const seed of [5, 6, 7]) {
+      const { timeS, headC } = shortCut(0, {}, seed);
+      const breakthroughs = analyzeReadings(timeS, headC).filter((e) => e.kind === 'breakthrough');
+      expect(breakthroughs).toHaveLength(2);
+      // The creep and pause end at 1440 s, and the head passes 71 degC (the stretch's mean, about
+      // 70, + 1) 5 s later; the slow fit's slope takes some 45 s to show the take-off.
+      expect(breakthroughs[1]!.timeS).toBeGreaterThan(1445);
+      expect(breakthroughs[1]!.timeS).toBeLessThan(1445 + 60);
+    }
+  });
+
+  it('a climb that slows down and speeds up again with no creep of a minute has no knee', () => {
+    // 5 degC/min for 20 min, one minute at 1.5 degC/min in the middle, after a breakthrough.
+    const { timeS, headC } = through([[0, 20], [300, 20], [320, 60], [1200, 60.2], [1260, 66], [1860, 76], [1905, 77.1], [2505, 87.1], [3000, 87.3]]);
+    expect(analyzeReadings(timeS, headC).filter((e) => e.kind === 'breakthrough')).toHaveLength(1);
+  });
+
+  it('a noisy board on a climb with a 40 s pause raises no second breakthrough (noise peaks are no sag)', () => {
+    // The sag must be deeper than the fast level's noise (3 sd): at 0.8 degC alone, 2 of these
+    // 20 seeds raised a second breakthrough on the pause at 70 degC (too short for a knee).
     for (let seed = 1; seed <= 20; seed++) {
-      const { timeS, headC } = shortCut(0, { intervalS: 2, noiseSdC: 0.5 }, seed);
+      const { timeS, headC } = through([[0, 20], [300, 20], [320, 60], [1200, 60.2], [1260, 66], [1310, 70], [1350, 70], [1560, 94], [1620, 96], [2400, 96.2]], seed, { intervalS: 2, noiseSdC: 0.5 });
       const breakthroughs = analyzeReadings(timeS, headC).filter((e) => e.kind === 'breakthrough');
       expect(breakthroughs).toHaveLength(1);
     }
