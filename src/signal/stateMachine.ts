@@ -203,9 +203,11 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
   }
   if (s.state !== 'stalled' && watchClimbSag(s, timeS, valueC, fastC, sink)) return;
   if (s.state !== 'stalled' && watchClimbKnee(s, timeS, valueC, fastC, slopeCPerS, sink)) return;
-  // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts.
+  // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts. A creep
+  // into the charge's last plateau is the head settling onto that component (a column of a plate
+  // or two takes half an hour to), not a stall, while it is there.
   if (Number.isNaN(s.creepSinceS) || slopeCPerS > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
-  if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS) {
+  if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS && !isLastLevel(s, fastC)) {
     s.hasRaisedCreep = true;
     sink.setState('stalled', timeS);
     s.stallReason = 'creeping';

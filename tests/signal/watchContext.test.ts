@@ -34,6 +34,17 @@ describe('RunWatcher told where the charge\'s plateaus lie', () => {
     expect(plateaus[1]!.isAlarm).toBe(false);
   });
 
+  it('a slow climb that settles onto the last component is no creeping stall once it is in that band', () => {
+    // A column of one plate: the head takes 45 minutes from the light component to the heavy one.
+    const slow = readings({
+      roomC: 20, vapourArrivalS: 400, arrivalTauS: 8,
+      plateaus: [{ levelC: 69, durationS: 900, riseS: 2700 }, { levelC: 110, durationS: 1200 }],
+    });
+    const stalls = (events: WatchEvent[]): string[] => events.filter((e) => e.kind === 'stall').map((e) => e.reason ?? '');
+    expect(stalls(analyzeReadings(slow.timeS, slow.headC))).toEqual(['creeping']);
+    expect(stalls(analyzeReadings(slow.timeS, slow.headC, { expectedPlateaus: bands }))).toEqual([]);
+  });
+
   it('a rise off the last component\'s plateau is no cut: nothing heavier is to come', () => {
     // The head holds at 107 for a few minutes, then settles 4 degC higher (still the heavy one).
     const settling = readings({
