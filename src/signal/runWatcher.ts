@@ -9,6 +9,11 @@ import type { CutWindow, EventKind, FaultReason, InvalidReason, PlateauReason, S
 import { resolveWatcherOptions, type WatcherOptions } from './watcherOptions.ts';
 import { createWatcherState, type WatcherState } from './watcherState.ts';
 
+/** Vapour arriving has landed on the first plateau, and the watcher declared it, within this
+ * (the stuck test leaves the arrival alone: a quiet board repeats one value as soon as the head
+ * lands). Two minutes were too few: an arrival of 100 s on a quiet 0.25 degC board was still
+ * 'rising' then, its first plateau not yet declared. Units: s. */
+const ARRIVAL_S = 300;
 /** Valid readings needed after a fault before the watcher trusts the sensor again. */
 const RECOVER_READINGS = 3;
 /** Quiet time after the last spike before an erratic sensor is trusted again. Units: s. */
@@ -91,7 +96,10 @@ export class RunWatcher {
     if (!isHand) {
       s.stuck ??= createStuckReadings();
       const climbCPerS = ewRegressionSlope(s.fast);
-      if (pushStuckReading(s.stuck, timeS, headC, s.state, s.resolutionC ?? Number.NaN, climbCPerS)) {
+      // Still rising five minutes after the vapour came (a first plateau never declared) is a
+      // climb like one off a plateau: a value frozen on it is judged against the climb.
+      const stuckState = s.state === 'rising' && timeS - s.vapourTimeS >= ARRIVAL_S ? 'leaving' : s.state;
+      if (pushStuckReading(s.stuck, timeS, headC, stuckState, s.resolutionC ?? Number.NaN, climbCPerS)) {
         this.enterFault(timeS, 'stuck', headC);
         return this.events;
       }

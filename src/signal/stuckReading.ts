@@ -112,7 +112,8 @@ export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number
   t.count++;
   t.steps++;
   const stillS = timeS - t.sinceS;
-  // Leaving a plateau only: vapour arriving lands on the first plateau within seconds, and a
+  // Leaving a plateau only (the watcher passes a climb still 'rising' five minutes after the
+  // vapour came as 'leaving'): vapour arriving lands on the first plateau within seconds, and a
   // quiet board then repeats one value at once (the climb's last rate says nothing of its end).
   if (state === 'rising') return false;
   if (state === 'leaving') {

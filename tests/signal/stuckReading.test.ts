@@ -142,4 +142,27 @@ describe('a reading stuck where it must move', () => {
     expect(faults[0]!.timeS).toBeGreaterThanOrEqual(1530 + 10);
     expect(faults[0]!.timeS).toBeLessThanOrEqual(1530 + 60);
   });
+
+  it('a board that hangs on a climb that never held a first plateau is a fault within a minute, five minutes after the arrival', () => {
+    // Shaped demo: vapour at 300 s, then a climb of 0.2 degC/s that never settles, read every
+    // 5 s by a quiet fine board (0.05 degC sd, 0.01 degC steps), hung at 660 s. The watcher is
+    // still 'rising' from the arrival; five minutes on, the climb is judged as off a plateau.
+    const climb = (freezeS: number): { t: number[]; c: number[] } => {
+      const random = createRandom(3);
+      const t: number[] = [], c: number[] = [];
+      for (let time = 0; time <= 900; time += 5) {
+        const head = time < 300 ? 20 : time < 330 ? 20 + (40 * (time - 300)) / 30 : 60 + 0.2 * (time - 330);
+        t.push(time);
+        c.push(time <= freezeS ? Math.round((head + 0.05 * random.normal()) * 100) / 100 : c[c.length - 1]!);
+      }
+      return { t, c };
+    };
+    const frozen = climb(660);
+    const faults = stuckFaults(run(new RunWatcher(), frozen.t, frozen.c));
+    expect(faults).toHaveLength(1);
+    expect(faults[0]!.timeS).toBeGreaterThanOrEqual(660 + 30);
+    expect(faults[0]!.timeS).toBeLessThanOrEqual(660 + 60);
+    const moving = climb(Infinity);
+    expect(stuckFaults(run(new RunWatcher(), moving.t, moving.c))).toHaveLength(0);
+  });
 });
