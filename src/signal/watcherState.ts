@@ -44,6 +44,8 @@ export interface WatcherState {
   /** Readings averaged into the level so far. */
   levelCount: number;
   plateauCandidateS: number;
+  /** Since when the head has been a breakthrough's rise above the plateau. Absent in older saves. */
+  riseSinceS?: number;
   peakC: number;
   troughC: number;
   fallSinceS: number;
@@ -105,7 +107,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     firstTimeS: NaN, lastTimeS: NaN, lastValidS: NaN, lastAcceptedS: NaN, latestInvalid: null,
     intervalS: NaN, lastValidC: NaN, resolutionC: NaN, recoverCount: 0,
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30), slowJumpCPerS: NaN,
-    innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN,
+    innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN, riseSinceS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
     hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), typedPrevC: NaN, typedPairC: NaN, kneeSinceS: NaN, kneeEndS: NaN, kneeSumC: 0, kneeCount: 0, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},

@@ -322,6 +322,17 @@ describe('RunWatcher breakthrough timing', () => {
     }
   });
 
+  it('a slow rise on a noisy board: a noise peak over the deadband does not alarm before the head is there (on-delay)', () => {
+    // Invented: the plateau at 80.1 degC, then 0.6 degC/min; the head passes 81.1 at 1600 s. A
+    // 0.4 degC board every 2 s; without the on-delay, 2 of these 30 seeds alarmed 27-40 s early.
+    const points: [number, number][] = [[0, 20], [300, 20], [320, 80], [1500, 80.1], [1800, 83.1], [2400, 84]];
+    for (let seed = 1; seed <= 30; seed++) {
+      const { timeS, headC } = through(points, seed, { intervalS: 2, noiseSdC: 0.4 });
+      const breakthrough = analyzeReadings(timeS, headC).find((e) => e.kind === 'breakthrough');
+      expect(breakthrough!.timeS).toBeGreaterThan(1600 - 20);
+    }
+  });
+
   it('a steep climb off a plateau alarms within 5 s of the head passing its level + 1 degC', () => {
     const { timeS, headC, truthC } = through([[0, 20], [300, 20], [320, 80], [1500, 80.1], [1560, 92], [2400, 92.1]]);
     const events = analyzeReadings(timeS, headC);
