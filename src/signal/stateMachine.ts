@@ -114,6 +114,11 @@ const KNEE_SLOW_C_PER_S = 0.04;
 const KNEE_EXIT_C_PER_S = 0.1;
 const KNEE_HOLD_S = 60;
 const KNEE_WITHIN_S = 120;
+/** With no plateau seen yet, a knee counts from this long after the vapour came: the arrival's
+ * slowing onto the first plateau is over by then, and a first cut that creeps from its start
+ * (never a plateau) still ends in one. Three minutes: one breakthrough more on each seed, no
+ * false alarm; one minute, one false alarm. Units: s. */
+const KNEE_AFTER_VAPOUR_S = 180;
 /** Two typed readings this close agree (watchTypedPair): half a degree, what a thermometer
  * graduated in degrees is read to by eye; and the reading step counted on top of the deadband,
  * at most a degree (the resolution estimate of a run's first readings can be the whole vapour
@@ -469,12 +474,12 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
  * (slow fit under KNEE_SLOW_C_PER_S) held max(KNEE_HOLD_S, two intervals), then the slope past
  * KNEE_EXIT_C_PER_S with the head (the lesser of fit and reading) a breakthrough's rise above
  * the stretch's mean, is that cut's breakthrough, its level the mean. Sensor readings only
- * (typed ones have watchTypedPair), once a plateau has been seen (vapour's arrival slows onto
- * the first plateau), with the plateau rules: none within a pause of the last breakthrough's
+ * (typed ones have watchTypedPair), once a plateau has been seen or KNEE_AFTER_VAPOUR_S after
+ * the vapour came (vapour's arrival slows onto the first plateau), with the plateau rules: none within a pause of the last breakthrough's
  * level, off a mixed level or off the last one. Returns whether it raised one.
  */
 function watchClimbKnee(s: WatcherState, timeS: number, valueC: number, fastC: number, slopeCPerS: number, sink: EventSink): boolean {
-  if (!Number.isFinite(s.levelC) || s.intervalS >= s.options.handIntervalS) return false;
+  if (!(Number.isFinite(s.levelC) || timeS - s.vapourTimeS >= KNEE_AFTER_VAPOUR_S) || s.intervalS >= s.options.handIntervalS) return false;
   // States saved before the knee existed carry none: it starts here then.
   const sinceS = s.kneeSinceS ?? NaN;
   if (slopeCPerS < -s.options.flatSlopeCPerS) {

@@ -394,6 +394,20 @@ describe('RunWatcher breakthrough timing', () => {
     }
   });
 
+  it('a first cut that creeps from the vapour\'s arrival, never a plateau, alarms at its knee', () => {
+    // Invented: vapour lands at 60 degC and the head creeps on at 1.5 degC/min for 6 minutes,
+    // then takes off at 12 degC/min; the head passes the creep's later mean + 1 near 690 s.
+    for (const seed of [5, 6, 7]) {
+      const { timeS, headC } = through([[0, 20], [300, 20], [320, 60], [680, 69], [820, 95], [1500, 95.2]], seed);
+      const events = analyzeReadings(timeS, headC);
+      expect(events.some((e) => e.kind === 'plateau' && e.timeS < 680)).toBe(false);
+      const breakthroughs = events.filter((e) => e.kind === 'breakthrough');
+      expect(breakthroughs).toHaveLength(1);
+      expect(breakthroughs[0]!.timeS).toBeGreaterThan(680);
+      expect(breakthroughs[0]!.timeS).toBeLessThan(680 + 60);
+    }
+  });
+
   it('a climb that slows down and speeds up again with no creep of a minute has no knee', () => {
     // 5 degC/min for 20 min, one minute at 1.5 degC/min in the middle, after a breakthrough.
     const { timeS, headC } = through([[0, 20], [300, 20], [320, 60], [1200, 60.2], [1260, 66], [1860, 76], [1905, 77.1], [2505, 87.1], [3000, 87.3]]);
