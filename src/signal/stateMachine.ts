@@ -252,7 +252,7 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
   if (!(valueC >= pairC + s.options.breakthroughMinRiseC + stepC)) return false;
   s.typedPairC = NaN;
-  if (pairC < (s.brokeFromC ?? NaN) + PAUSE_C || isMixedLevel(s, pairC) || isLastLevel(s, pairC)) return false;
+  if (!isOwnCut(s, pairC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, pairC, valueC, sink);
   return true;
 }
@@ -327,6 +327,15 @@ function isLastLevel(s: WatcherState, levelC: number): boolean {
   if (expected.length < 2) return false;
   const last = expected.reduce((a, b) => (b.toC > a.toC ? b : a));
   return holdsLevel(last, levelC) && !expected.some((p) => p !== last && holdsLevel(p, levelC));
+}
+
+/**
+ * The plateau rules for a stretch the watcher never declared a plateau (a climb's sag or knee, a
+ * typed pair): it raises a breakthrough of its own unless it lies within `sameClimbC` above the
+ * level the last breakthrough left (the same climb), at a mixed level, or at the last one.
+ */
+function isOwnCut(s: WatcherState, levelC: number, sameClimbC: number): boolean {
+  return !(levelC < (s.brokeFromC ?? NaN) + sameClimbC || isMixedLevel(s, levelC) || isLastLevel(s, levelC));
 }
 
 function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: number, fastC: number, sink: EventSink): void {
@@ -462,7 +471,7 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
   if (!(Math.min(fastC, valueC) >= sag.fromC + s.options.breakthroughMinRiseC)) return false;
   const levelC = sag.fromC;
   sag.fromC = NaN;
-  if (levelC < (s.brokeFromC ?? NaN) + SHOULDER_C || isMixedLevel(s, levelC) || isLastLevel(s, levelC)) return false;
+  if (!isOwnCut(s, levelC, SHOULDER_C)) return false;
   raiseBreakthrough(s, timeS, levelC, fastC, sink);
   return true;
 }
@@ -475,8 +484,9 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
  * KNEE_EXIT_C_PER_S with the head (the lesser of fit and reading) a breakthrough's rise above
  * the stretch's mean, is that cut's breakthrough, its level the mean. Sensor readings only
  * (typed ones have watchTypedPair), once a plateau has been seen or KNEE_AFTER_VAPOUR_S after
- * the vapour came (vapour's arrival slows onto the first plateau), with the plateau rules: none within a pause of the last breakthrough's
- * level, off a mixed level or off the last one. Returns whether it raised one.
+ * the vapour came (vapour's arrival slows onto the first plateau), with the plateau rules:
+ * none within a pause of the last breakthrough's level, off a mixed level or off the last one.
+ * Returns whether it raised one.
  */
 function watchClimbKnee(s: WatcherState, timeS: number, valueC: number, fastC: number, slopeCPerS: number, sink: EventSink): boolean {
   if (!(Number.isFinite(s.levelC) || timeS - s.vapourTimeS >= KNEE_AFTER_VAPOUR_S) || s.intervalS >= s.options.handIntervalS) return false;
@@ -509,7 +519,7 @@ function watchClimbKnee(s: WatcherState, timeS: number, valueC: number, fastC: n
   const levelC = s.kneeSumC! / s.kneeCount!;
   if (!(slopeCPerS > KNEE_EXIT_C_PER_S && Math.min(fastC, valueC) >= levelC + s.options.breakthroughMinRiseC)) return false;
   s.kneeSinceS = NaN;
-  if (levelC < (s.brokeFromC ?? NaN) + PAUSE_C || isMixedLevel(s, levelC) || isLastLevel(s, levelC)) return false;
+  if (!isOwnCut(s, levelC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, levelC, fastC, sink);
   return true;
 }
