@@ -22,7 +22,7 @@ export interface RunPlan {
   /** Where each component's (or azeotrope's) plateau can lie: a steady head outside them all is
    * a mixed fraction, and the run watcher raises no breakthrough off it. Absent in plans made
    * before it existed. Units: degC */
-  expectedPlateaus?: Array<{ label: string; fromC: number; toC: number }>;
+  expectedPlateaus?: Array<{ label: string; fromC: number; toC: number; reachesPurity?: boolean }>;
   /** The column simulator's expected head temperature through the run, drawn faintly on Watch. */
   predicted?: { time_s: number[]; head_c: number[] };
 }
@@ -41,6 +41,6 @@ export function toRunPlan(plan: CutPlan, pressurePa: number, plates: number): Ru
     pressurePa,
     plates,
     isEstimated: plan.isEstimated,
-    expectedPlateaus: plan.expectedPlateaus.map((p) => ({ label: p.label, fromC: p.fromTK - 273.15, toC: p.toTK - 273.15 })),
+    expectedPlateaus: plan.expectedPlateaus.map((p) => ({ label: p.label, fromC: p.fromTK - 273.15, toC: p.toTK - 273.15, reachesPurity: p.reachesPurity })),
   };
 }

@@ -50,7 +50,7 @@ export const plan: Command = {
         boiling_points: result.boilingPoints.map((b) => ({ compound: b.compound, t_c: round(b.tK - 273.15, 2), is_extrapolated: b.isExtrapolated })),
         relative_volatility: result.relativeVolatilities.map((r) => ({ pair: r.pair, at_start: round(r.atStart, 3), at_end: round(r.atEnd, 3) })),
         minimum_stages: result.minimumStages.map((n) => (Number.isFinite(n) ? round(n, 2) : null)),
-        expected_plateaus: result.expectedPlateaus.map((p) => ({ label: p.label, from_c: round(p.fromTK - 273.15, 1), to_c: round(p.toTK - 273.15, 1) })),
+        expected_plateaus: result.expectedPlateaus.map((p) => ({ label: p.label, from_c: round(p.fromTK - 273.15, 1), to_c: round(p.toTK - 273.15, 1), reaches_purity: p.reachesPurity })),
         azeotropes: result.azeotropes.map((a) => ({ pair: a.pair, status: a.status, azeotropes: a.azeotropes.map((z) => ({ kind: z.kind, t_c: round(z.tK - 273.15, 2), x1: round(z.x1, 3) })) })),
         advice: result.advice.map((a) => ({ kind: a.kind, text: a.text })),
         is_estimated: result.isEstimated, warning,
@@ -60,7 +60,7 @@ export const plan: Command = {
       for (const f of result.fractions) {
         io.out(`  receiver ${f.receiver}: ${(f.compound ?? 'intermediate').padEnd(24)} ${(f.fromTK - 273.15).toFixed(1)}-${(f.toTK - 273.15).toFixed(1)} degC  about ${(f.volumeM3 * 1e6).toFixed(1)} mL`);
       }
-      io.out(`  plateaus expected: ${result.expectedPlateaus.map((p) => `${p.label} ${(p.fromTK - 273.15).toFixed(1)}-${(p.toTK - 273.15).toFixed(1)} degC`).join('; ')}`);
+      io.out(`  plateaus expected: ${result.expectedPlateaus.map((p) => `${p.label} ${(p.fromTK - 273.15).toFixed(1)}-${(p.toTK - 273.15).toFixed(1)} degC${p.reachesPurity ? '' : ' (never 90 % pure with this column: the head passes through)'}`).join('; ')}`);
       for (const a of result.advice) io.out(`${a.kind === 'caution' ? 'caution' : 'advice'}: ${a.text}`);
       if (warning) io.err(`warning: ${warning}`);
     }

@@ -92,6 +92,7 @@ export function planCuts(input: CutPlanInput): CutPlan {
   }
 
   const steps = simulateTotalReflux(mixture, x, chargeMol, pPa, plates);
+  const peakHeadFraction = compounds.map((_, i) => steps.reduce((most, step) => Math.max(most, step.head[i]!), 0));
   const fractions: PlannedFraction[] = [];
   let current: { compound: string | null; from: number; to: number; moles: number; amounts: Float64Array } | null = null;
   const flush = () => {
@@ -138,7 +139,7 @@ export function planCuts(input: CutPlanInput): CutPlan {
     relativeVolatilities,
     minimumStages,
     azeotropes,
-    expectedPlateaus: expectedPlateaus(compounds, pPa, model, azeotropes),
+    expectedPlateaus: expectedPlateaus(compounds, pPa, model, azeotropes, peakHeadFraction),
     advice: adviseDistillation(boiling, azeotropes, plates, minimumStages, input.heatSourceMaxK),
     isEstimated: mixture.isEstimated,
   };

@@ -12,6 +12,13 @@ export interface ExpectedPlateau {
   /** Units: K */
   fromTK: number;
   toTK: number;
+  /**
+   * Whether the column can bring this component's top vapour to 90 % (an azeotrope, or a
+   * component of one: always).
+   * False for a column too short for it: at the most it can do, total reflux, its vapour stays
+   * mixed, so a steady head in this band is a mixed stretch the head is passing through.
+   */
+  reachesPurity: boolean;
 }
 
 /** Top vapour still counted as one component (the run watcher's benchmark truth: 90 %). */
@@ -30,8 +37,14 @@ const ABOVE_K = 1.5;
  * converge (a strongly associating pair, such as an acid with a base), nothing is expected: the
  * watcher then takes every plateau as a component's, as with no charge known, rather than call
  * a component's plateau mixed.
+ *
+ * `peakHeadFraction`, if given, is the most of each compound (in `compounds` order) the head's
+ * vapour holds at any point of the run at total reflux (the planner's estimate, simulateTotalReflux):
+ * a finite reflux separates less than total reflux with the same plates (Fenske's minimum stages
+ * are those at total reflux; Seader & Henley, Separation Process Principles, from memory), so a
+ * compound short of 90 % there is short of it in any run of this column.
  */
-export function expectedPlateaus(compounds: readonly Compound[], pPa: number, model: ThermoModel, azeotropes: readonly PairAzeotropes[]): ExpectedPlateau[] {
+export function expectedPlateaus(compounds: readonly Compound[], pPa: number, model: ThermoModel, azeotropes: readonly PairAzeotropes[], peakHeadFraction?: readonly number[]): ExpectedPlateau[] {
   if (!(pPa > 0)) throw new RangeError(`pressure must be > 0 Pa (got ${pPa})`);
   const order = compounds.map((c, i) => ({ c, i, tK: tSatK(c, pPa).tK })).sort((a, b) => a.tK - b.tK);
   const withTenthOf = (main: number, other: number): number => {
@@ -44,7 +57,12 @@ export function expectedPlateaus(compounds: readonly Compound[], pPa: number, mo
   try {
     bands = order.map((o, k) => {
       const dews = order.map((_, j) => (j === k ? o.tK : withTenthOf(k, j)));
-      return { label: o.c.name, fromTK: Math.min(...dews) - BELOW_K, toTK: Math.max(...dews) + ABOVE_K };
+      // A compound in an azeotrope of the charge comes over as the constant-boiling mixture, which
+      // holds the head as steady as a pure vapour would: its top vapour need not reach 90 %.
+      const peak = peakHeadFraction?.[o.i];
+      const formsAzeotrope = azeotropes.some((pair) => pair.azeotropes.length > 0 && pair.pair.includes(o.c.name));
+      const reachesPurity = peak === undefined || peak >= PURITY || formsAzeotrope;
+      return { label: o.c.name, fromTK: Math.min(...dews) - BELOW_K, toTK: Math.max(...dews) + ABOVE_K, reachesPurity };
     });
   } catch (error) {
     if (error instanceof ConvergenceError) return [];
@@ -52,7 +70,7 @@ export function expectedPlateaus(compounds: readonly Compound[], pPa: number, mo
   }
   for (const pair of azeotropes) {
     for (const azeotrope of pair.azeotropes) {
-      bands.push({ label: `${pair.pair[0]} + ${pair.pair[1]} azeotrope`, fromTK: azeotrope.tK - BELOW_K, toTK: azeotrope.tK + ABOVE_K });
+      bands.push({ label: `${pair.pair[0]} + ${pair.pair[1]} azeotrope`, fromTK: azeotrope.tK - BELOW_K, toTK: azeotrope.tK + ABOVE_K, reachesPurity: true });
     }
   }
   return bands;

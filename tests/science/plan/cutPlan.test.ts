@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { findCompound } from '../../../src/science/compounds/index.ts';
 import { planCuts } from '../../../src/science/plan/cutPlan.ts';
+import { perryDippr101 } from '../../fixtures/perryDippr101.ts';
 
 const hexTol = { compounds: [findCompound('n-hexane'), findCompound('toluene')], x: [0.4, 0.6], chargeMol: 0.5, pPa: 101325, model: 'unifac' as const };
 
@@ -59,6 +60,29 @@ describe('planCuts', () => {
     expect(plan.relativeVolatilities[0]!.atEnd).toBeLessThan(plan.relativeVolatilities[0]!.atStart);
     expect(plan.minimumStages[0]).toBeGreaterThan(5.5);
     expect(plan.minimumStages[0]).toBeLessThan(7.5);
+  });
+  it('says which components a column can bring over 90 % pure, as the Fenske total-reflux relation does (benzene/toluene)', () => {
+    // At total reflux the head's first vapour from a pot of x_B benzene satisfies
+    // y_B / (1 - y_B) = alpha^(plates + 1) x_B / (1 - x_B) (Fenske, 1932; the pot is a stage).
+    // alpha is Raoult's-law p_B/p_T from the DIPPR-101 vapour pressures (Perry's 8th ed.,
+    // Table 2-8) at 365 K, near the equimolar bubble point.
+    const psat = (name: string, tK: number): number => {
+      const c = perryDippr101.find((p) => p.name === name)!;
+      return Math.exp(c.c1 + c.c2 / tK + c.c3 * Math.log(tK) + c.c4 * tK ** c.c5);
+    };
+    const alpha = psat('benzene', 365) / psat('toluene', 365);
+    const firstHead = (plates: number): number => {
+      const ratio = alpha ** (plates + 1);
+      return ratio / (1 + ratio);
+    };
+    const benzeneBand = (plates: number) => planCuts({ compounds: [findCompound('benzene'), findCompound('toluene')], x: [0.5, 0.5], chargeMol: 0.5, pPa: 101325, plates, model: 'ideal' })
+      .expectedPlateaus.find((b) => b.label === 'benzene')!;
+    expect(firstHead(0)).toBeLessThan(0.75);
+    expect(benzeneBand(0).reachesPurity).toBe(false);
+    expect(firstHead(1)).toBeLessThan(0.88);
+    expect(benzeneBand(1).reachesPurity).toBe(false);
+    expect(firstHead(2)).toBeGreaterThan(0.93);
+    expect(benzeneBand(2).reachesPurity).toBe(true);
   });
   it.each([
     { chargeMol: 0 }, { pPa: 0 }, { plates: -1 }, { x: [1] }, { targetPurity: 1.5 },

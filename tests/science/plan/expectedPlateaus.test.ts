@@ -46,6 +46,22 @@ describe('expectedPlateaus', () => {
     expect(expectedPlateaus(pair, 101_325, 'unifac', [])).toEqual([]);
   });
 
+  it('marks a compound short of 90 % at the head, at the most the column can do, as one that never comes over pure', () => {
+    // The peak head fractions are the planner's estimate at total reflux (here given directly).
+    const marked = expectedPlateaus(compounds, 101_325, 'ideal', [], [0.72, 0.97]);
+    expect(marked.map((b) => [b.label, b.reachesPurity])).toEqual([['toluene', false], ['p-xylene', true]]);
+    // The bands themselves do not move: only the word on purity.
+    expect(marked.map((b) => [b.fromTK, b.toTK])).toEqual(bands.map((b) => [b.fromTK, b.toTK]));
+    // Told nothing of the column, every band may hold a plateau.
+    expect(bands.every((b) => b.reachesPurity)).toBe(true);
+  });
+
+  it('keeps an azeotrope, and a compound of one, as plateaus however short of 90 % its vapour stays', () => {
+    const pair = [findCompound('methanol'), findCompound('toluene')];
+    const withAzeotrope = expectedPlateaus(pair, 101_325, 'unifac', findAzeotropes(pair, 101_325, 'unifac'), [0.85, 0.6]);
+    expect(withAzeotrope.every((b) => b.reachesPurity)).toBe(true);
+  });
+
   it('refuses a pressure of zero with a reason', () => {
     expect(() => expectedPlateaus(compounds, 0, 'ideal', [])).toThrow(/pressure must be > 0/);
   });
