@@ -25,7 +25,7 @@ export function normaliseExpectedPlateaus(plateaus: readonly ExpectedPlateau[]):
     if (!Number.isFinite(p.fromC) || !Number.isFinite(p.toC) || !(p.toC >= p.fromC)) {
       throw new RangeError(`expected plateau ${i + 1}: from and to must be finite degC, from <= to`);
     }
-    return { label: String(p.label), fromC: p.fromC, toC: p.toC };
+    return { label: String(p.label), fromC: p.fromC, toC: p.toC, ...(p.reachesPurity === false ? { reachesPurity: false } : {}) };
   });
   return checked.sort((a, b) => a.fromC - b.fromC);
 }
@@ -35,9 +35,12 @@ export function holdsLevel(plateau: ExpectedPlateau, levelC: number): boolean {
   return levelC >= plateau.fromC && levelC <= plateau.toC;
 }
 
-/** A level outside every expected plateau (none given: never): a mixed fraction. */
+/**
+ * A level outside every expected plateau a component can come over pure in (none given: never):
+ * a mixed fraction. A band the column cannot bring to purity holds no plateau of its own.
+ */
 export function isOutsideExpected(expected: readonly ExpectedPlateau[], levelC: number): boolean {
-  return expected.length > 0 && !expected.some((p) => holdsLevel(p, levelC));
+  return expected.length > 0 && !expected.some((p) => p.reachesPurity !== false && holdsLevel(p, levelC));
 }
 
 /** Index of the window holding `headC`, else of the nearest window below it, else 0. */

@@ -12,8 +12,9 @@ export function parseCutPlan(json: string): CutWindow[] {
 
 /**
  * A cut plan as above, with the optional `expected_plateaus` that `cutbell plan --json` prints
- * (`{ "label": "toluene", "from_c": 108.1, "to_c": 116.3 }`): where each component's plateau can
- * lie, so the watcher can tell a mixed stretch from a component coming over.
+ * (`{ "label": "toluene", "from_c": 108.1, "to_c": 116.3, "reaches_purity": true }`): where each
+ * component's plateau can lie, and whether the column can bring it over pure at all, so the
+ * watcher can tell a mixed stretch from a component coming over.
  */
 export function parseWatchContext(json: string): { plan: CutWindow[]; expectedPlateaus: ExpectedPlateau[] } {
   let doc: unknown;
@@ -35,11 +36,14 @@ export function parseWatchContext(json: string): { plan: CutWindow[]; expectedPl
   const plateaus = record.expected_plateaus ?? [];
   if (!Array.isArray(plateaus)) throw new RangeError('plan "expected_plateaus" must be an array of {label, from_c, to_c}');
   const expectedPlateaus: ExpectedPlateau[] = normaliseExpectedPlateaus(plateaus.map((item: unknown, i) => {
-    const p = (item ?? {}) as { label?: unknown; from_c?: unknown; to_c?: unknown };
+    const p = (item ?? {}) as { label?: unknown; from_c?: unknown; to_c?: unknown; reaches_purity?: unknown };
     if (typeof p.label !== 'string' || typeof p.from_c !== 'number' || typeof p.to_c !== 'number') {
       throw new RangeError(`plan expected plateau ${i + 1}: needs a label and numbers from_c and to_c (degC)`);
     }
-    return { label: p.label, fromC: p.from_c, toC: p.to_c };
+    if (p.reaches_purity !== undefined && typeof p.reaches_purity !== 'boolean') {
+      throw new RangeError(`plan expected plateau ${i + 1}: reaches_purity must be true or false`);
+    }
+    return { label: p.label, fromC: p.from_c, toC: p.to_c, ...(p.reaches_purity === false ? { reachesPurity: false } : {}) };
   }));
   return { plan, expectedPlateaus };
 }

@@ -219,9 +219,10 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
   if (s.state !== 'stalled' && watchClimbKnee(s, timeS, valueC, fastC, slopeCPerS, sink)) return;
   // A steep climb is a cut under way, not a creep: only time spent climbing slowly counts. A creep
   // into the charge's last plateau is the head settling onto that component (a column of a plate
-  // or two takes half an hour to), not a stall, while it is there.
+  // or two takes half an hour to), not a stall, while it is there; nor is one through the mixed
+  // stretch of a column too short for the charge.
   if (Number.isNaN(s.creepSinceS) || slopeCPerS > CREEP_MAX_C_PER_S) s.creepSinceS = timeS;
-  if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS && !isLastLevel(s, fastC)) {
+  if (!s.hasRaisedCreep && s.state !== 'stalled' && timeS - s.creepSinceS >= o.creepStallS && !isLastLevel(s, fastC) && !isShortColumnClimb(s, fastC)) {
     s.hasRaisedCreep = true;
     sink.setState('stalled', timeS);
     s.stallReason = 'creeping';
@@ -327,6 +328,15 @@ function isLastLevel(s: WatcherState, levelC: number): boolean {
   if (expected.length < 2) return false;
   const last = expected.reduce((a, b) => (b.toC > a.toC ? b : a));
   return holdsLevel(last, levelC) && !expected.some((p) => p !== last && holdsLevel(p, levelC));
+}
+
+/**
+ * A head at a mixed level above a band the column cannot bring to purity (the charge says so):
+ * the head of a column too short for the charge, passing from one component to the next as a
+ * simple distillation's does, climbing steadily for half an hour or more with nothing to settle on.
+ */
+function isShortColumnClimb(s: WatcherState, levelC: number): boolean {
+  return isMixedLevel(s, levelC) && (s.expectedPlateaus ?? []).some((p) => p.reachesPurity === false && p.fromC <= levelC);
 }
 
 /**

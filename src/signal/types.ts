@@ -27,6 +27,9 @@ export interface ExpectedPlateau {
   label: string;
   fromC: number;
   toC: number;
+  /** False where the column cannot bring this component over 90 % pure (the planner's estimate
+   * at total reflux): a steady head in the band alone is then a mixed stretch. Absent: true. */
+  reachesPurity?: boolean;
 }
 
 /** What the watcher may be told about a run: its cut plan, and where plateaus can lie. */

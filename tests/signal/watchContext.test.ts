@@ -55,6 +55,32 @@ describe('RunWatcher told where the charge\'s plateaus lie', () => {
     expect(alarms(analyzeReadings(settling.timeS, settling.headC, { expectedPlateaus: bands }))).toEqual(['vapour', 'breakthrough']);
   });
 
+  it('a plateau in a band the column cannot bring to purity is a mixed fraction too: its end raises nothing', () => {
+    // Demo: a column too short for the pair; the planner says the light one never comes over pure.
+    const short: ExpectedPlateau[] = [{ ...bands[0]!, reachesPurity: false }, bands[1]!];
+    const events = analyzeReadings(withMixedStretch.timeS, withMixedStretch.headC, { expectedPlateaus: short });
+    expect(alarms(events)).toEqual(['vapour']);
+    expect(events.filter((e) => e.kind === 'plateau').map((p) => p.reason ?? 'component')).toEqual(['mixed', 'mixed', 'component']);
+  });
+
+  it('a long climb through the mixed stretch of a column too short for the charge is no creeping stall', () => {
+    // Demo: a simple distillation's head, 50 minutes from a light component near 70 degC to a heavy
+    // one near 130 degC.
+    const wide: ExpectedPlateau[] = [{ label: 'light', fromC: 66, toC: 75 }, { label: 'heavy', fromC: 125, toC: 136 }];
+    const simple = readings({
+      roomC: 20, vapourArrivalS: 400, arrivalTauS: 8,
+      plateaus: [{ levelC: 70, durationS: 60, riseS: 3000 }, { levelC: 130, durationS: 1200 }],
+    });
+    const stalls = (context: { expectedPlateaus?: ExpectedPlateau[] }): WatchEvent[] => analyzeReadings(simple.timeS, simple.headC, context).filter((e) => e.kind === 'stall');
+    const alone = stalls({});
+    expect(alone.map((e) => e.reason)).toEqual(['creeping']);
+    expect(alone[0]!.headC).toBeGreaterThan(wide[0]!.toC);
+    expect(alone[0]!.headC).toBeLessThan(wide[1]!.fromC);
+    // Told the column brings the light one over pure, the same creep between the bands is a stall.
+    expect(stalls({ expectedPlateaus: wide }).map((e) => e.reason)).toEqual(['creeping']);
+    expect(stalls({ expectedPlateaus: [{ ...wide[0]!, reachesPurity: false }, wide[1]!] })).toEqual([]);
+  });
+
   it('resumes from a saved state with the bands it was given', () => {
     const { timeS, headC } = withMixedStretch;
     const whole = analyzeReadings(timeS, headC, { expectedPlateaus: bands });
@@ -114,6 +140,15 @@ describe('parseWatchContext', () => {
     const context = parseWatchContext(json);
     expect(context.plan.map((w) => w.receiver)).toEqual([1, 2]);
     expect(context.expectedPlateaus.map((p) => p.label)).toEqual(['n-hexane', 'toluene']);
+  });
+
+  it('reads which bands the column can bring to purity, and names a bad reaches_purity', () => {
+    const context = parseWatchContext(JSON.stringify({
+      cuts: [],
+      expected_plateaus: [{ label: 'n-hexane', from_c: 66.2, to_c: 75.4, reaches_purity: false }, { label: 'toluene', from_c: 105.2, to_c: 112.1, reaches_purity: true }],
+    }));
+    expect(context.expectedPlateaus.map((p) => p.reachesPurity !== false)).toEqual([false, true]);
+    expect(() => parseWatchContext('{"cuts": [], "expected_plateaus": [{"label": "a", "from_c": 60, "to_c": 70, "reaches_purity": "no"}]}')).toThrow(/expected plateau 1: reaches_purity must be true or false/);
   });
 
   it('takes a plan with no expected plateaus, and names what is wrong with a bad one', () => {

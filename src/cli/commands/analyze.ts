@@ -14,9 +14,11 @@ plateau (with its level), breakthrough, stall, sensor-fault, and with a plan, cu
   --plan FILE      cut plan, JSON: {"cuts": [{"receiver": 1, "from_c": 55, "to_c": 58.5}, ...]}
                    ("windows" is accepted for "cuts", and the output of cutbell plan --json);
                    events then name the next receiver. With the plan's "expected_plateaus"
-                   ({"label", "from_c", "to_c"}: where each component's plateau can lie) a
-                   steady head outside them all is a mixed fraction: plateau, reason mixed,
-                   and no breakthrough off it
+                   ({"label", "from_c", "to_c", "reaches_purity"}: where each component's
+                   plateau can lie, and false where the column cannot bring it over 90 %
+                   pure) a steady head outside them all, or only in bands that never come
+                   over pure, is a mixed fraction: plateau, reason mixed, and no
+                   breakthrough off it
   --json           one JSON object per event and line:
                    {"file","time_s","event","head_c","alarm","message","action","reason","receiver"}
 
