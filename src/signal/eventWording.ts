@@ -43,7 +43,7 @@ export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallRea
       if (reason === 'mixed') {
         return {
           category: null,
-          message: `Steady${degrees(headC)}, between the boiling points of the charge: a mixed fraction`,
+          message: `Steady${degrees(headC)}, where no component of the charge comes over nearly pure: a mixed fraction`,
           action: receiver === undefined ? 'Keep it apart from the main cuts' : `Keep collecting in receiver ${receiver}, apart from the main cuts`,
         };
       }

@@ -43,7 +43,7 @@ describe('wordEvent', () => {
     expect(fault && 'alarm' in fault && fault.alarm.message).toBe('Sensor problem: open thermocouple');
     expect(wordEvent({ time_s: 1, event: 'vapour', head_c: 60 }, 2)).toEqual({ info: 'Vapour has reached the thermometer' });
     expect(wordEvent({ time_s: 1, event: 'plateau', head_c: 77.06 }, 2)).toEqual({ info: 'Steady at 77.1 °C' });
-    expect(wordEvent({ time_s: 1, event: 'plateau', head_c: 92.04, reason: 'mixed' }, 2)).toEqual({ info: 'Steady at 92.0 °C, between the boiling points of the charge: a mixed fraction' });
+    expect(wordEvent({ time_s: 1, event: 'plateau', head_c: 92.04, reason: 'mixed' }, 2)).toEqual({ info: 'Steady at 92.0 °C, where no component of the charge comes over nearly pure: a mixed fraction' });
     expect(wordEvent({ time_s: 1, event: 'something-new', head_c: 1 }, 2)).toBeNull();
   });
 
