@@ -75,6 +75,12 @@ describe('the plan\'s expected plateaus reach the run watcher', () => {
     expect(firstOf(events, 'breakthrough')).toBeDefined();
   });
 
+  it('a plateau in a band the plan says the column cannot bring to purity is a mixed fraction too', () => {
+    const events = feedWith({ windows: [], expectedPlateaus: [{ label: 'ethyl acetate', fromC: 74, toC: 80, reachesPurity: false }, { label: 'toluene', fromC: 105, toC: 112 }] });
+    expect(firstOf(events, 'plateau')?.reason).toBe('mixed');
+    expect(firstOf(events, 'breakthrough')).toBeUndefined();
+  });
+
   it('a plateau outside them is a mixed fraction, with no breakthrough; a malformed entry is ignored', () => {
     const events = feedWith({ windows: [], expectedPlateaus: [{ label: 'a', fromC: 60, toC: 70 }, { label: 'b', fromC: 100, toC: 110 }, { label: 'bad', fromC: 'x' }] });
     expect(firstOf(events, 'plateau')?.reason).toBe('mixed');
