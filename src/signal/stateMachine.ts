@@ -378,17 +378,7 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
     const slope2 = Number.isNaN(slopePower) ? ewRegressionSlope(s.fast) ** 2 : Math.min(ewRegressionSlope(s.fast) ** 2, ROBUST_CLIP * slopePower);
     s.fastSlopePowerC2PerS2 = Number.isNaN(slopePower) ? slope2 : slopePower - Math.expm1(-dtS / RESIDUAL_POWER_TAU_S) * (slope2 - slopePower);
   }
-  const whiteC2S = (Number.isNaN(s.innovationVarC2) ? 0 : s.innovationVarC2) * s.intervalS;
-  const wanderC2S = Number.isNaN(s.residualPowerC2) ? 0 : DIFFUSION_SAFETY * 2 * WANDER_TAU_S * s.residualPowerC2;
-  const diffusionC2S = Math.max(DIFFUSION_FLOOR_C2S, whiteC2S, wanderC2S);
-  const thresholdCS = cusumThresholdForMeanTime(o.breakthroughReferenceC, diffusionC2S, o.targetFalseAlarmIntervalH * 3600);
   s.cusumCS = Math.max(0, s.cusumCS + (residualC - o.breakthroughReferenceC) * dtS);
-  // Past the deadband, a climb far steeper than any plateau creep needs no more evidence (two
-  // detectors: the CUSUM on the level for slow rises, the fast slope for sharp ones). The slope's
-  // noise is never taken below a share of what the reading noise alone gives the fast fit.
-  const whiteSlopeSdCPerS = readingNoiseC(s) * ewSlopeNoisePerSd(s.fast.tauS, s.intervalS);
-  const slopeSdCPerS = Math.max(Math.sqrt(s.fastSlopePowerC2PerS2 ?? NaN), WHITE_SLOPE_FLOOR * whiteSlopeSdCPerS);
-  const isClimbing = Number.isFinite(slopeSdCPerS) && ewRegressionSlope(s.fast) >= CLIMB_FACTOR * o.flatSlopeCPerS + CLIMB_SLOPE_SDS * slopeSdCPerS;
   // The rise past the deadband is the lesser of the fast fit and the reading, as for the peak
   // (watchRising): a fit of few readings, typed ones above all, extrapolates its slope past the
   // last reading (a whole-degree reading of 53 read as 53.9, the plateau at 52.1).
@@ -398,9 +388,9 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
   // and typed readings need no wait.
   if (!(fastC - s.levelC >= o.breakthroughMinRiseC)) s.riseSinceS = NaN;
   else if (Number.isNaN(s.riseSinceS ?? NaN)) s.riseSinceS = timeS;
-  const riseHoldS = s.intervalS >= o.handIntervalS ? 0 : Math.min(RISE_HOLD_READINGS * s.intervalS, RISE_HOLD_MAX_S);
-  const fires = (s.cusumCS >= thresholdCS && timeS - s.riseSinceS! >= riseHoldS) || isClimbing;
-  if (fires && riseC >= o.breakthroughMinRiseC) {
+  // Below the deadband neither detector may alarm: their tests (a Newton solve for the CUSUM's
+  // threshold) are left for the few readings past it.
+  if (riseC >= o.breakthroughMinRiseC && isLeavingPlateau(s, timeS)) {
     s.peakC = fastC;
     s.plateauCandidateS = NaN;
     s.fallSinceS = NaN;
@@ -432,6 +422,25 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
   } else {
     s.sagSinceS = NaN;
   }
+}
+
+/**
+ * Whether the head, past the deadband, is leaving the plateau: two detectors, the CUSUM on the
+ * level for slow rises (after its on-delay) and the fast slope for sharp climbs, a climb far
+ * steeper than any plateau creep needing no more evidence. The slope's noise is never taken
+ * below a share of what the reading noise alone gives the fast fit.
+ */
+function isLeavingPlateau(s: WatcherState, timeS: number): boolean {
+  const o = s.options;
+  const whiteC2S = (Number.isNaN(s.innovationVarC2) ? 0 : s.innovationVarC2) * s.intervalS;
+  const wanderC2S = Number.isNaN(s.residualPowerC2) ? 0 : DIFFUSION_SAFETY * 2 * WANDER_TAU_S * s.residualPowerC2;
+  const diffusionC2S = Math.max(DIFFUSION_FLOOR_C2S, whiteC2S, wanderC2S);
+  const thresholdCS = cusumThresholdForMeanTime(o.breakthroughReferenceC, diffusionC2S, o.targetFalseAlarmIntervalH * 3600);
+  const riseHoldS = s.intervalS >= o.handIntervalS ? 0 : Math.min(RISE_HOLD_READINGS * s.intervalS, RISE_HOLD_MAX_S);
+  if (s.cusumCS >= thresholdCS && timeS - s.riseSinceS! >= riseHoldS) return true;
+  const whiteSlopeSdCPerS = readingNoiseC(s) * ewSlopeNoisePerSd(s.fast.tauS, s.intervalS);
+  const slopeSdCPerS = Math.max(Math.sqrt(s.fastSlopePowerC2PerS2 ?? NaN), WHITE_SLOPE_FLOOR * whiteSlopeSdCPerS);
+  return Number.isFinite(slopeSdCPerS) && ewRegressionSlope(s.fast) >= CLIMB_FACTOR * o.flatSlopeCPerS + CLIMB_SLOPE_SDS * slopeSdCPerS;
 }
 
 /** The head is leaving the plateau at `levelC`: change receivers (the next one, with a plan). */
