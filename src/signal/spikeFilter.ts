@@ -148,8 +148,21 @@ function summarise(f: SpikeFilter): void {
   for (let i = 0; i < n; i++) sorted[i] = f.values[(f.head + i) % CAPACITY]!;
   insertionSort(sorted, n);
   const median = middle(sorted, n);
-  for (let i = 0; i < n; i++) deviations[i] = Math.abs(sorted[i]! - median);
-  insertionSort(deviations, n);
+  // The distances from the median grow outwards on both sides of it in the sorted window:
+  // merging the two runs gives them in order, up to the middle one, with no second sort.
+  const h = n >> 1;
+  let below = n % 2 === 1 ? h : h - 1, above = below + 1;
+  for (let i = 0; i <= h; i++) {
+    const lowC = below >= 0 ? Math.abs(sorted[below]! - median) : Infinity;
+    const highC = above < n ? Math.abs(sorted[above]! - median) : Infinity;
+    if (lowC <= highC) {
+      deviations[i] = lowC;
+      below--;
+    } else {
+      deviations[i] = highC;
+      above++;
+    }
+  }
   f.medianC = median;
   f.scaleC = MAD_TO_SD * middle(deviations, n);
   f.isDirty = false;
