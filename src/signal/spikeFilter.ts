@@ -110,8 +110,11 @@ function dropPending(f: SpikeFilter, keepSpikes: number, hasReturned: boolean): 
     f.spikeTimesS.push(f.pendingTimes[0]!);
     if (f.spikeTimesS.length > keepSpikes) f.spikeTimesS.shift();
   }
-  f.pendingTimes.length = 0;
-  f.pendingValues.length = 0;
+  // Most readings have nothing pending, and truncating even an empty array is a runtime call.
+  if (n > 0) {
+    f.pendingTimes.length = 0;
+    f.pendingValues.length = 0;
+  }
   f.pendingSide = 0;
   f.pendingMaxErrorC = 0;
   return n;
