@@ -372,11 +372,13 @@ function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: numbe
     // Each square counted at most ROBUST_CLIP times the power so far (winsorised): the edges of
     // a pre-cut sag pass through the band with a steep slope, and must not raise the noise the
     // breakthrough is then measured against.
+    const powerGain = -Math.expm1(-dtS / RESIDUAL_POWER_TAU_S);
     const power = Number.isNaN(s.residualPowerC2) ? offsetC * offsetC : Math.min(offsetC * offsetC, ROBUST_CLIP * s.residualPowerC2);
-    s.residualPowerC2 = Number.isNaN(s.residualPowerC2) ? power : s.residualPowerC2 - Math.expm1(-dtS / RESIDUAL_POWER_TAU_S) * (power - s.residualPowerC2);
+    s.residualPowerC2 = Number.isNaN(s.residualPowerC2) ? power : s.residualPowerC2 + powerGain * (power - s.residualPowerC2);
     const slopePower = s.fastSlopePowerC2PerS2 ?? NaN;
-    const slope2 = Number.isNaN(slopePower) ? ewRegressionSlope(s.fast) ** 2 : Math.min(ewRegressionSlope(s.fast) ** 2, ROBUST_CLIP * slopePower);
-    s.fastSlopePowerC2PerS2 = Number.isNaN(slopePower) ? slope2 : slopePower - Math.expm1(-dtS / RESIDUAL_POWER_TAU_S) * (slope2 - slopePower);
+    const slope2 = ewRegressionSlope(s.fast) ** 2;
+    const clippedSlope2 = Number.isNaN(slopePower) ? slope2 : Math.min(slope2, ROBUST_CLIP * slopePower);
+    s.fastSlopePowerC2PerS2 = Number.isNaN(slopePower) ? clippedSlope2 : slopePower + powerGain * (clippedSlope2 - slopePower);
   }
   s.cusumCS = Math.max(0, s.cusumCS + (residualC - o.breakthroughReferenceC) * dtS);
   // The rise past the deadband is the lesser of the fast fit and the reading, as for the peak
