@@ -84,6 +84,15 @@ describe('planCuts', () => {
     expect(firstHead(2)).toBeGreaterThan(0.93);
     expect(benzeneBand(2).reachesPurity).toBe(true);
   });
+  it('advises that a component the column cannot bring to purity comes in mixed fractions, before the cautions', () => {
+    const plan = planCuts({ compounds: [findCompound('benzene'), findCompound('toluene')], x: [0.5, 0.5], chargeMol: 0.5, pPa: 101325, plates: 0, model: 'ideal' });
+    const index = plan.advice.findIndex((a) => /benzene never comes over 90 % pure/.test(a.text));
+    expect(index).toBeGreaterThanOrEqual(0);
+    expect(plan.advice[index]!.kind).toBe('method');
+    expect(plan.advice.slice(0, index).every((a) => a.kind === 'method')).toBe(true);
+    const tall = planCuts({ compounds: [findCompound('benzene'), findCompound('toluene')], x: [0.5, 0.5], chargeMol: 0.5, pPa: 101325, plates: 4, model: 'ideal' });
+    expect(tall.advice.some((a) => /never comes over 90 % pure/.test(a.text))).toBe(false);
+  });
   it.each([
     { chargeMol: 0 }, { pPa: 0 }, { plates: -1 }, { x: [1] }, { targetPurity: 1.5 },
   ])('planCuts refuses bad input %j', (bad) => {
