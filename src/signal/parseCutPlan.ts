@@ -43,7 +43,7 @@ export function parseWatchContext(json: string): { plan: CutWindow[]; expectedPl
     if (p.reaches_purity !== undefined && typeof p.reaches_purity !== 'boolean') {
       throw new RangeError(`plan expected plateau ${i + 1}: reaches_purity must be true or false`);
     }
-    return { label: p.label, fromC: p.from_c, toC: p.to_c, ...(p.reaches_purity === false ? { reachesPurity: false } : {}) };
+    return { label: p.label, fromC: p.from_c, toC: p.to_c, reachesPurity: p.reaches_purity };
   }));
   return { plan, expectedPlateaus };
 }

@@ -472,8 +472,9 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
   // States saved before the sag existed carry none: it starts here then.
   const sag = (s.climbSag ??= noClimbSag());
   if (Number.isNaN(sag.fromC)) {
-    const depthC = Math.max(CLIMB_SAG_C, CLIMB_SAG_NOISE_SDS * readingNoiseC(s) * ewLevelNoisePerSd(s.fast.tauS, s.intervalS));
-    if (!(fastC < s.peakC - depthC)) {
+    // The noise's share of the depth only once the head is down by the least depth (every reading
+    // of a climb passes here).
+    if (!(fastC < s.peakC - CLIMB_SAG_C) || !(fastC < s.peakC - CLIMB_SAG_NOISE_SDS * readingNoiseC(s) * ewLevelNoisePerSd(s.fast.tauS, s.intervalS))) {
       sag.belowSinceS = NaN;
       return false;
     }

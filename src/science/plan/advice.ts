@@ -1,6 +1,7 @@
 import type { Compound } from '../compounds/compound.ts';
 import { figuresFor, type Figures } from '../units/figures.ts';
 import type { PairAzeotropes } from '../vle/findAzeotropes.ts';
+import type { ExpectedPlateau } from './expectedPlateaus.ts';
 
 /** One piece of advice in plain words; `basis` says where the rule comes from. */
 export interface Advice {
@@ -28,6 +29,7 @@ export function adviseDistillation(
   azeotropes: readonly PairAzeotropes[],
   plates: number,
   minimumStages: readonly number[],
+  expected: readonly ExpectedPlateau[],
   heatSourceMaxK?: number,
   figures: Figures = figuresFor(),
 ): Advice[] {
@@ -49,6 +51,14 @@ export function adviseDistillation(
     if (needed !== undefined && Number.isFinite(needed) && needed > plates + 1) {
       advice.push({ kind: 'method', text: `Separating ${pair} to 95 % needs at least ${Math.ceil(needed)} theoretical stages at total reflux; the column gives about ${(plates + 1).toFixed(0)} with the pot. Expect a large intermediate fraction.`, basis: 'Fenske equation (Fenske 1932)' });
     }
+  }
+  for (const band of expected) {
+    if (band.reachesPurity) continue;
+    advice.push({
+      kind: 'method',
+      text: `With this column ${band.label} never comes over 90 % pure, even at total reflux: it comes in mixed fractions, and the watcher calls no cut off its steady stretches. Collecting it pure needs more plates.`,
+      basis: 'the plan\'s total-reflux estimate (a finite reflux separates less)',
+    });
   }
   for (const pair of azeotropes) {
     if (pair.status === 'unknown') {

@@ -134,14 +134,6 @@ export function planCuts(input: CutPlanInput): CutPlan {
 
   const boiling = order.map((o) => ({ compound: o.c, tK: o.sat.tK }));
   const bands = expectedPlateaus(compounds, pPa, model, azeotropes, peakHeadFraction);
-  const advice = adviseDistillation(boiling, azeotropes, plates, minimumStages, input.heatSourceMaxK);
-  const unreached = bands.filter((b) => !b.reachesPurity).map((b): Advice => ({
-    kind: 'method',
-    text: `With this column ${b.label} never comes over 90 % pure, even at total reflux: it comes in mixed fractions, and the watcher calls no cut off its steady stretches. Collecting it pure needs more plates.`,
-    basis: 'the plan\'s total-reflux estimate (a finite reflux separates less)',
-  }));
-  const lastMethod = advice.map((a) => a.kind).lastIndexOf('method');
-  advice.splice(lastMethod + 1, 0, ...unreached);
   return {
     fractions: tiled,
     boilingPoints: order.map((o) => ({ compound: o.c.name, tK: o.sat.tK, isExtrapolated: o.sat.isExtrapolated })),
@@ -149,7 +141,7 @@ export function planCuts(input: CutPlanInput): CutPlan {
     minimumStages,
     azeotropes,
     expectedPlateaus: bands,
-    advice,
+    advice: adviseDistillation(boiling, azeotropes, plates, minimumStages, bands, input.heatSourceMaxK),
     isEstimated: mixture.isEstimated,
   };
 }

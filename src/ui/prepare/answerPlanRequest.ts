@@ -48,7 +48,7 @@ function heavyPart(request: PlanRequest): Omit<HeavyPart, 'key'> {
   const azeotropes = findAzeotropes(compounds, pressurePa, 'unifac');
   const byName = new Map(compounds.map((c) => [c.name, c]));
   const boiling = cutPlan.boilingPoints.map((b) => ({ compound: byName.get(b.compound)!, tK: b.tK }));
-  const advice = adviseDistillation(boiling, azeotropes, plates, cutPlan.minimumStages, heatSourceMaxK, figuresFor(request.figureStyle));
+  const advice = adviseDistillation(boiling, azeotropes, plates, cutPlan.minimumStages, cutPlan.expectedPlateaus, heatSourceMaxK, figuresFor(request.figureStyle));
   let binary: PlanResult['binary'] = null;
   if (compounds.length === 2) {
     const curve = binaryTxy(mixture, pressurePa, 51);

@@ -13,13 +13,13 @@ const boiling = [
 
 describe('adviseDistillation in the reader\'s units', () => {
   it('writes the gap between boiling points in degC by default', () => {
-    const texts = adviseDistillation(boiling, [], 3, []).map((a) => a.text).join('\n');
+    const texts = adviseDistillation(boiling, [], 3, [], []).map((a) => a.text).join('\n');
     // 383.75 - 329.23 = 54.52 K apart: a short column (common practice)
     expect(texts).toMatch(/boil 55 °C apart: a short column/);
   });
 
   it('writes the same gap as a difference in degF (x 1.8, no offset; NIST SP 811, B.8) and the autoignition limit on that scale', () => {
-    const texts = adviseDistillation(boiling, [], 3, [], undefined, figuresFor({ temperature: 'degF', pressure: 'kPa', decimalMark: '.' })).map((a) => a.text).join('\n');
+    const texts = adviseDistillation(boiling, [], 3, [], [], undefined, figuresFor({ temperature: 'degF', pressure: 'kPa', decimalMark: '.' })).map((a) => a.text).join('\n');
     // 54.52 K x 1.8 = 98.1 degF
     expect(texts).toMatch(/boil 98 °F apart/);
     expect(texts).toMatch(/autoignition temperature of \w+ \(about \d+ °F\)/);

@@ -42,6 +42,15 @@ describe('createPlanAnswerer (the planning worker, called directly)', () => {
     expect(result.advice.some((a) => /azeotrope/.test(a.text))).toBe(true);
   });
 
+  it('advises on Prepare that a component the column cannot bring over 90 % pure comes in mixed fractions', () => {
+    // Benzene/toluene with no plates: the first vapour from an equimolar pot is about 70 % benzene
+    // at total reflux (alpha about 2.4-2.6, Fenske relation with one stage; tests/science/plan/cutPlan.test.ts).
+    const result = answer(requestFor(['benzene', 'toluene'], [50, 50], 101325, 0));
+    expect(result.advice.some((a) => /benzene never comes over 90 % pure/.test(a.text))).toBe(true);
+    const tall = answer(requestFor(['benzene', 'toluene'], [50, 50], 101325, 6));
+    expect(tall.advice.some((a) => /never comes over 90 % pure/.test(a.text))).toBe(false);
+  });
+
   it('falls back to Raoult for a compound of the chemist\'s own and calls the pair unknown, never "none"', () => {
     const request = requestFor(['toluene'], [50]);
     request.compounds.push({ kind: 'user', input: { name: 'my ester', normalBoilingPointK: 420, molarMassKgPerMol: 0.13, liquidDensityKgPerM3: 880 } });
