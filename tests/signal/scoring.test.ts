@@ -66,6 +66,14 @@ describe('scoreRun', () => {
     const stray = scoreRun(windows.alarms, windows.plateaus, [...events, { timeS: 510, kind: 'vapour', headC: 70 }], windows.cutIns);
     expect(stray.falseAlarmCount).toBe(1);
   });
+  it('truthWindows gives a first purity interval a cut-in window only when a mixed fraction came over before it', () => {
+    // The first distillate pure 50 s after the vapour (100 s): the first receiver takes it.
+    expect(truthWindows(handTruth(), 1, false).cutIns).toEqual([]);
+    // Pure only from 400 s, five minutes of mixed distillate after the vapour: the plan's first
+    // receiver is an intermediate one, and the cut into the main cut comes as this one begins.
+    const late = { ...handTruth(), purityIntervals: [{ startS: 400, endS: 600, component: 'b' }] };
+    expect(truthWindows(late, 1, false).cutIns).toEqual([{ timeS: 400, fromS: 340, toS: 640 }]);
+  });
 
   it('scoreRun counts a second alarm in a hit window as nuisance and false, and a stray as false', () => {
     const s = scoreRun(alarms, plateaus, [

@@ -31,6 +31,13 @@ export interface PlateauTruth {
 }
 
 /**
+ * A first purity interval beginning this soon after the vapour holds the first drops: the
+ * simulated truth starts a plateau that comes with the vapour 60 s after it, past the arrival's
+ * jump, and the first distillate can take as long again to come over pure. Units: s.
+ */
+const FIRST_DROPS_S = 120;
+
+/**
  * The benchmark's definitions (issue 5):
  * - plateau level: the median noise-free head temperature while the top vapour is >= 90 %
  *   one component; a plateau event is a hit inside that interval with its level within 1.5 degC;
@@ -44,9 +51,12 @@ export interface PlateauTruth {
  * - sensor-fault: the start of the fault, hit within 60 s.
  * - cut-in (our addition): the issue asks for an alarm at each planned cut, and a plan's cut out
  *   of an intermediate fraction into the next main cut comes as the next component's plateau
- *   begins, where the issue's truth has no window. Each purity interval after the first gives
- *   one, shaped as a breakthrough's, about its start; only a planned `cut` can take it, and it
- *   counts in no recall (a hit only keeps that cut from counting false).
+ *   begins, where the issue's truth has no window. Each purity interval gives one, shaped as a
+ *   breakthrough's, about its start, but for a first one that the first distillate comes over in
+ *   (it begins within FIRST_DROPS_S of the vapour: the first receiver takes it, no cut). A first
+ *   one that begins later follows a mixed first fraction, and its main cut is a cut in. Only a
+ *   planned `cut` can take one, and it counts in no recall (a hit only keeps that cut from
+ *   counting false).
  * `readingIntervalS` is the median time between readings.
  */
 export function truthWindows(truth: RunTruth, readingIntervalS: number, isHand: boolean): { alarms: AlarmWindow[]; plateaus: PlateauTruth[]; cutIns: CutInWindow[] } {
@@ -62,7 +72,9 @@ export function truthWindows(truth: RunTruth, readingIntervalS: number, isHand: 
     if (!Number.isNaN(crossS)) alarms.push({ kind: 'breakthrough', timeS: crossS, fromS: crossS - 60, toS: crossS + afterS });
   }
   const starts = truth.purityIntervals.map((p) => p.startS).sort((a, b) => a - b);
-  for (const t of starts.slice(1)) cutIns.push({ timeS: t, fromS: t - 60, toS: t + afterS });
+  const vapourS = truth.events.find((e) => e.kind === 'vapour')?.timeS;
+  const isFirstDrops = vapourS === undefined || starts[0]! - vapourS <= FIRST_DROPS_S;
+  for (const t of isFirstDrops ? starts.slice(1) : starts) cutIns.push({ timeS: t, fromS: t - 60, toS: t + afterS });
   for (const event of truth.events) {
     const t = event.timeS;
     if (event.kind === 'vapour') alarms.push({ kind: 'vapour', timeS: t, fromS: t - 10, toS: t + 120 });
