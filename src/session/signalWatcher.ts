@@ -2,13 +2,14 @@ import { RunWatcher as Detector, type CutWindow, type ExpectedPlateau, type Watc
 import type { AlarmSettingsRecord } from '../run/index.ts';
 import type { RunWatcher, WatcherEvent } from './types.ts';
 
-/** Receiver windows from a run's plan (`plan.windows`), or none. */
+/** Receiver windows from a run's plan (`plan.windows`), or none; a compound that is neither a
+ * name nor null is left out (the window is then unnamed, as in plans that never named them). */
 export function planCutWindows(plan: unknown): CutWindow[] {
   const windows = (plan as { windows?: unknown } | null)?.windows;
   if (!Array.isArray(windows)) return [];
-  return windows.filter(
-    (w): w is CutWindow => typeof w === 'object' && w !== null && Number.isFinite(w.receiver) && Number.isFinite(w.fromC) && Number.isFinite(w.toC),
-  );
+  return windows
+    .filter((w): w is CutWindow => typeof w === 'object' && w !== null && Number.isFinite(w.receiver) && Number.isFinite(w.fromC) && Number.isFinite(w.toC))
+    .map(({ receiver, fromC, toC, compound }) => ({ receiver, fromC, toC, ...(typeof compound === 'string' || compound === null ? { compound } : {}) }));
 }
 
 /** Where the plan expects each component's plateau (`plan.expectedPlateaus`), or nowhere. */

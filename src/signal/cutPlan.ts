@@ -9,7 +9,8 @@ export function normaliseCutPlan(windows: readonly CutWindow[]): CutWindow[] {
     if (!Number.isInteger(w.receiver) || !(w.receiver >= 0)) throw new RangeError(`cut window ${i + 1}: receiver must be a whole number >= 0`);
     if (!Number.isFinite(w.fromC) || !Number.isFinite(w.toC)) throw new RangeError(`cut window ${i + 1}: from and to must be finite degC`);
     if (!(w.toC > w.fromC)) throw new RangeError(`cut window ${i + 1}: to (${w.toC} degC) must exceed from (${w.fromC} degC)`);
-    return { receiver: w.receiver, fromC: w.fromC, toC: w.toC };
+    if (w.compound !== undefined && w.compound !== null && typeof w.compound !== 'string') throw new RangeError(`cut window ${i + 1}: compound must be a name or null`);
+    return { receiver: w.receiver, fromC: w.fromC, toC: w.toC, ...(w.compound !== undefined ? { compound: w.compound } : {}) };
   });
   plan.sort((a, b) => a.fromC - b.fromC);
   for (let i = 1; i < plan.length; i++) {

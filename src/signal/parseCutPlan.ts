@@ -4,7 +4,8 @@ import type { CutWindow, ExpectedPlateau } from './types.ts';
 /**
  * A cut plan from JSON: an object with a `cuts` (or `windows`, or the `fractions` that
  * `cutbell plan --json` prints) array of `{ "receiver": 1, "from_c": 55, "to_c": 58.5 }`,
- * temperatures in degC. Throws RangeError with the reason for anything else.
+ * temperatures in degC, each with the optional `"compound"` of a main cut (null for an
+ * intermediate one). Throws RangeError with the reason for anything else.
  */
 export function parseCutPlan(json: string): CutWindow[] {
   return parseWatchContext(json).plan;
@@ -27,11 +28,12 @@ export function parseWatchContext(json: string): { plan: CutWindow[]; expectedPl
   const list = record.cuts ?? record.windows ?? record.fractions;
   if (!Array.isArray(list)) throw new RangeError('plan must be an object with a "cuts" array of {receiver, from_c, to_c}');
   const plan = normaliseCutPlan(list.map((item: unknown, i) => {
-    const w = (item ?? {}) as { receiver?: unknown; from_c?: unknown; to_c?: unknown };
+    const w = (item ?? {}) as { receiver?: unknown; from_c?: unknown; to_c?: unknown; compound?: unknown };
     if (typeof w.receiver !== 'number' || typeof w.from_c !== 'number' || typeof w.to_c !== 'number') {
       throw new RangeError(`plan cut ${i + 1}: needs numbers receiver, from_c and to_c (degC)`);
     }
-    return { receiver: w.receiver, fromC: w.from_c, toC: w.to_c };
+    // normaliseCutPlan checks the compound.
+    return { receiver: w.receiver, fromC: w.from_c, toC: w.to_c, ...(w.compound !== undefined ? { compound: w.compound as string | null } : {}) };
   }));
   const plateaus = record.expected_plateaus ?? [];
   if (!Array.isArray(plateaus)) throw new RangeError('plan "expected_plateaus" must be an array of {label, from_c, to_c}');

@@ -70,6 +70,12 @@ const RECOVERY_RISE_C = 3;
 const RECOVERY_HOLD_S = 30;
 /** Climbing faster than this is not creeping (3.6 degC/min). Units: degC/s. */
 const CREEP_MAX_C_PER_S = 0.06;
+/** A plateau this far below the next main cut's window, in its component's expected plateau,
+ * is that cut beginning (plateauWindowIndex): the window's own allowance (0.5 degC) and the
+ * degree or so a head thermometer reads low (common practice). Further down the band it is a
+ * mixed pause (simulated corpus: two such, 2.5-2.8 degC below, 3-7 minutes before the
+ * component came over 90 % pure). Units: degC. */
+const BELOW_WINDOW_C = 1.5;
 /** Crossing a planned cut needs this margin above the window's top, held this long. */
 const CUT_MARGIN_C = 0.3;
 /** A plateau reached within this of the level a breakthrough left (or of the shoulder before
@@ -169,7 +175,24 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
     const isRisingOff = s.state === 'plateau' && headC - s.levelC >= s.options.breakthroughMinRiseC;
     if (isClimbing || isRisingOff) watchPlannedCut(s, timeS, headC, sink);
     else s.cutSinceS = NaN;
+    if (s.state === 'rising' || s.state === 'leaving') watchTypedCutIn(s, timeS, sink);
   }
+}
+
+/**
+ * Typed readings: two that agree (watchTypedPair) where the next main cut's component holds the
+ * head (plateauWindowIndex) are that cut beginning. Declaring the plateau takes two or three
+ * readings more, minutes of the main cut run into the intermediate receiver.
+ */
+function watchTypedCutIn(s: WatcherState, timeS: number, sink: EventSink): void {
+  const pairC = s.typedPairC ?? NaN;
+  if (!(s.intervalS >= s.options.handIntervalS) || !Number.isFinite(pairC)) return;
+  const index = plateauWindowIndex(s, pairC);
+  if (!(index > s.receiverIndex && typeof s.plan[index]!.compound === 'string')) return;
+  s.receiverIndex = index;
+  s.cutSinceS = NaN;
+  s.windowDwellS = 0;
+  sink.emit(timeS, 'cut', pairC, undefined, s.plan[index]!.receiver);
 }
 
 function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
@@ -306,11 +329,42 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.stallReason = null;
   sink.setState('plateau', timeS);
   let receiver: number | undefined;
+  let isCutIn = false;
   if (s.plan.length > 0) {
-    s.receiverIndex = Math.max(s.receiverIndex, windowIndexAt(s.plan, levelC));
-    receiver = s.plan[s.receiverIndex]?.receiver;
+    const index = plateauWindowIndex(s, levelC);
+    isCutIn = index > s.receiverIndex && typeof s.plan[index]!.compound === 'string';
+    s.receiverIndex = index;
+    receiver = s.plan[index]!.receiver;
   }
   sink.emit(timeS, 'plateau', levelC, isMixedLevel(s, levelC) ? 'mixed' : undefined, receiver);
+  if (isCutIn) {
+    // The head has settled on the next main cut's component short of its planned window: that
+    // cut begins here, not when the head climbs through the window.
+    s.cutSinceS = NaN;
+    s.windowDwellS = 0;
+    sink.emit(timeS, 'cut', levelC, undefined, receiver);
+  }
+}
+
+/**
+ * The plan's window for a plateau at `levelC`: the main cut (from the current receiver on, up
+ * to the window above the level's) whose compound's expected plateau holds the level, where
+ * the plan names its compounds and the charge's plateaus are known; else the window holding the
+ * level, never one back. The windows are the planner's estimate of the head at total reflux, and
+ * a thermometer in a real head reads a degree or so off it (bulb placement, heat lost from the
+ * head), so a component's plateau can sit just outside its window: just above it, it is still
+ * that cut (no silent move to the intermediate receiver, whose change the breakthrough then
+ * announces); just below the next one, it is that cut beginning.
+ */
+function plateauWindowIndex(s: WatcherState, levelC: number): number {
+  const byWindow = Math.max(s.receiverIndex, windowIndexAt(s.plan, levelC));
+  const bands = s.expectedPlateaus ?? [];
+  for (let k = Math.max(0, s.receiverIndex); k < s.plan.length && k <= byWindow + 1; k++) {
+    const { compound, fromC } = s.plan[k]!;
+    if (k > byWindow && levelC < fromC - BELOW_WINDOW_C) break;
+    if (typeof compound === 'string' && bands.some((b) => b.label === compound && b.reachesPurity !== false && holdsLevel(b, levelC))) return k;
+  }
+  return byWindow;
 }
 
 /** A level outside every expected plateau of the charge (none known: never). */

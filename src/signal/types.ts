@@ -17,6 +17,9 @@ export interface CutWindow {
   receiver: number;
   fromC: number;
   toC: number;
+  /** The compound of a main cut (an expected plateau's label), null for an intermediate cut;
+   * absent where the plan does not say. */
+  compound?: string | null;
 }
 
 /**

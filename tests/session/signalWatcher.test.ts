@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { AlarmSettingsRecord } from '../../src/run/index.ts';
-import { createSignalWatcher, watcherOptionsFor, type WatcherEvent } from '../../src/session/index.ts';
+import { createSignalWatcher, planCutWindows, watcherOptionsFor, type WatcherEvent } from '../../src/session/index.ts';
 
 // A shaped demo trace, not data: room temperature, vapour, a plateau at 77 degC for 15 min,
 // then a climb of 0.05 degC/s. One reading a second.
@@ -79,6 +79,14 @@ describe('the plan\'s expected plateaus reach the run watcher', () => {
     const events = feedWith({ windows: [], expectedPlateaus: [{ label: 'ethyl acetate', fromC: 74, toC: 80, reachesPurity: false }, { label: 'toluene', fromC: 105, toC: 112 }] });
     expect(firstOf(events, 'plateau')?.reason).toBe('mixed');
     expect(firstOf(events, 'breakthrough')).toBeUndefined();
+  });
+
+  it('the plan\'s named windows reach it: a plateau just below the main cut\'s window is that cut; a malformed name leaves the window unnamed', () => {
+    const bands = [{ label: 'ethyl acetate', fromC: 74, toC: 80 }, { label: 'toluene', fromC: 105, toC: 112 }];
+    const windows = [{ receiver: 1, fromC: 40, toC: 77.8, compound: null }, { receiver: 2, fromC: 77.8, toC: 79, compound: 'ethyl acetate' }, { receiver: 3, fromC: 79, toC: 110, compound: null }];
+    const named = feedWith({ windows, expectedPlateaus: bands });
+    expect(named.filter((e) => e.event === 'cut' || e.event === 'breakthrough').map((e) => `${e.event}:${e.receiver}`)).toEqual(['cut:2', 'breakthrough:3']);
+    expect(planCutWindows({ windows: [{ ...windows[1]!, compound: 7 }] })).toEqual([{ receiver: 2, fromC: 77.8, toC: 79 }]);
   });
 
   it('a plateau outside them is a mixed fraction, with no breakthrough; a malformed entry is ignored', () => {

@@ -129,6 +129,53 @@ describe('RunWatcher with a cut plan', () => {
     const events = analyzeReadings(timeS, headC, tooLow);
     expect(alarms(events).filter((a) => !a.startsWith('vapour'))).toEqual(['breakthrough:3']);
   });
+
+  // The plan names each main cut's compound and the charge's bands are known: the watcher can
+  // tell a component's plateau a little outside its window (the planner's total-reflux estimate,
+  // a head thermometer reading a degree or so off it) from the intermediate fraction.
+  const namedBands: ExpectedPlateau[] = [{ label: 'light', fromC: 52, toC: 62 }, { label: 'heavy', fromC: 95, toC: 104 }];
+
+  it('with named cuts, a plateau just above its main window is still that cut: the breakthrough names the intermediate receiver', () => {
+    const plan = [{ receiver: 1, fromC: 53, toC: 55.3, compound: 'light' }, { receiver: 2, fromC: 55.3, toC: 97, compound: null }, { receiver: 3, fromC: 97, toC: 102, compound: 'heavy' }];
+    const events = analyzeReadings(timeS, headC, { plan, expectedPlateaus: namedBands });
+    expect(events.find((e) => e.kind === 'plateau')?.receiver).toBe(1);
+    expect(alarms(events)).toEqual(['vapour:1', 'breakthrough:2', 'cut:3']);
+  });
+
+  it('with named cuts, a plateau just below the next main window is that cut beginning: the cut comes as the plateau is found', () => {
+    // A first fraction planned as mixed, the light component's window planned 0.8 degC above its plateau.
+    const plan = [{ receiver: 1, fromC: 30, toC: 56.8, compound: null }, { receiver: 2, fromC: 56.8, toC: 58.5, compound: 'light' }, { receiver: 3, fromC: 58.5, toC: 97, compound: null }, { receiver: 4, fromC: 97, toC: 102, compound: 'heavy' }];
+    const events = analyzeReadings(timeS, headC, { plan, expectedPlateaus: namedBands });
+    const plateau = events.find((e) => e.kind === 'plateau')!;
+    const cut = events.find((e) => e.kind === 'cut')!;
+    expect([cut.timeS, cut.receiver]).toEqual([plateau.timeS, 2]);
+    expect(alarms(events)).toEqual(['vapour:1', 'cut:2', 'breakthrough:3', 'cut:4']);
+    // Without the compounds the plateau is taken for the intermediate fraction, as before: the
+    // breakthrough names the light component's receiver, and the climb through its window a third.
+    const unnamed = plan.map(({ receiver, fromC, toC }) => ({ receiver, fromC, toC }));
+    expect(alarms(analyzeReadings(timeS, headC, { plan: unnamed, expectedPlateaus: namedBands }))).toEqual(['vapour:1', 'breakthrough:2', 'cut:3', 'cut:4']);
+  });
+
+  it('with named cuts and typed readings, two that agree on the next main cut\'s component are that cut, before its plateau is declared', () => {
+    // Invented typed run, a reading every 90-101 s: the light cut, a climb, the heavy one read
+    // as 99 and 99.5 about the bottom of its window (never the intermediate's top and its margin).
+    const readings = [20, 20, 55.5, 56, 56, 56, 56, 56, 58, 66, 80, 92, 99, 99.5, 99, 99.5, 99, 99.5, 99];
+    const timeS = Float64Array.from(readings, (_, i) => 30 + i * 90 + (i % 2) * 11);
+    const plan = [{ receiver: 1, fromC: 54, toC: 57, compound: 'light' }, { receiver: 2, fromC: 57, toC: 99.3, compound: null }, { receiver: 3, fromC: 99.3, toC: 102, compound: 'heavy' }];
+    const events = analyzeReadings(timeS, Float64Array.from(readings), { plan, expectedPlateaus: namedBands });
+    expect(alarms(events)).toEqual(['vapour:1', 'breakthrough:2', 'cut:3']);
+    const cut = events.find((e) => e.kind === 'cut')!;
+    expect(cut.timeS).toBe(timeS[13]);
+    expect(cut.timeS).toBeLessThan(events.filter((e) => e.kind === 'plateau').at(-1)!.timeS);
+  });
+
+  it('with named cuts, a plateau further down the band than a thermometer reads off is no cut into the window above', () => {
+    const plan = [{ receiver: 1, fromC: 30, toC: 58, compound: null }, { receiver: 2, fromC: 58, toC: 60, compound: 'light' }, { receiver: 3, fromC: 60, toC: 97, compound: null }, { receiver: 4, fromC: 97, toC: 102, compound: 'heavy' }];
+    const events = analyzeReadings(timeS, headC, { plan, expectedPlateaus: namedBands });
+    const plateau = events.find((e) => e.kind === 'plateau')!;
+    expect(events.some((e) => e.kind === 'cut' && e.timeS === plateau.timeS)).toBe(false);
+    expect(plateau.receiver).toBe(1);
+  });
 });
 
 describe('parseWatchContext', () => {
@@ -139,6 +186,8 @@ describe('parseWatchContext', () => {
     });
     const context = parseWatchContext(json);
     expect(context.plan.map((w) => w.receiver)).toEqual([1, 2]);
+    expect(context.plan.map((w) => w.compound)).toEqual(['n-hexane', null]);
+    expect(() => parseWatchContext('{"cuts": [{"receiver": 1, "from_c": 60, "to_c": 62, "compound": 7}]}')).toThrow(/cut window 1: compound must be a name or null/);
     expect(context.expectedPlateaus.map((p) => p.label)).toEqual(['n-hexane', 'toluene']);
   });
 

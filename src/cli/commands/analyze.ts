@@ -18,7 +18,8 @@ plateau (with its level), breakthrough, stall, sensor-fault, and with a plan, cu
                    plateau can lie, and false where the column cannot bring it over 90 %
                    pure) a steady head outside them all, or only in bands that never come
                    over pure, is a mixed fraction: plateau, reason mixed, and no
-                   breakthrough off it
+                   breakthrough off it. A cut's "compound" (null for an intermediate one)
+                   lets a plateau a little outside its window count as that cut
   --json           one JSON object per event and line:
                    {"file","time_s","event","head_c","alarm","message","action","reason","receiver"}
 
