@@ -1,6 +1,6 @@
 import type { AlarmKind } from '../run/index.ts';
 import type { Figures } from '../science/index.ts';
-import { sensorSilentWording as silent, wordWatchEvent, type AlarmCategory, type EventKind, type FaultReason, type PlateauReason, type StallReason } from '../signal/index.ts';
+import { sensorSilentWording as silent, wordWatchEvent, type AlarmCategory, type EventKind, type EventReason } from '../signal/index.ts';
 import type { WatcherEvent } from './types.ts';
 
 export interface AlarmWording {
@@ -14,7 +14,7 @@ const sameKinds: AlarmCategory extends AlarmKind ? (AlarmKind extends AlarmCateg
 void sameKinds;
 
 const EVENT_KINDS: ReadonlySet<string> = new Set<EventKind>(['vapour', 'plateau', 'breakthrough', 'stall', 'sensor-fault', 'cut']);
-const REASONS: ReadonlySet<string> = new Set<StallReason | FaultReason | PlateauReason>(['no-vapour', 'falling-away', 'creeping', 'no-valid-readings', 'open-thermocouple', 'erratic', 'stuck', 'mixed']);
+const REASONS: ReadonlySet<string> = new Set<EventReason>(['no-vapour', 'falling-away', 'creeping', 'no-valid-readings', 'open-thermocouple', 'erratic', 'stuck', 'mixed', 'settled']);
 
 /**
  * Turns a watcher event into an alarm that names its action, or into information, or nothing
@@ -25,7 +25,7 @@ const REASONS: ReadonlySet<string> = new Set<StallReason | FaultReason | Plateau
 export function wordEvent(event: WatcherEvent, nextReceiver: number, figures?: Figures): { alarm: AlarmWording } | { info: string } | null {
   if (!EVENT_KINDS.has(event.event)) return null;
   const kind = event.event as EventKind;
-  const reason = typeof event.reason === 'string' && REASONS.has(event.reason) ? (event.reason as StallReason | FaultReason | PlateauReason) : undefined;
+  const reason = typeof event.reason === 'string' && REASONS.has(event.reason) ? (event.reason as EventReason) : undefined;
   const isChange = kind === 'breakthrough' || kind === 'cut';
   const receiver = typeof event.receiver === 'number' ? event.receiver : isChange ? nextReceiver : undefined;
   const worded = wordWatchEvent(kind, event.head_c ?? Number.NaN, reason, receiver, figures);

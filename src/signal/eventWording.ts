@@ -1,5 +1,5 @@
 import { figuresFor, type Figures } from '../science/units/figures.ts';
-import type { EventKind, FaultReason, PlateauReason, StallReason } from './types.ts';
+import type { EventKind, EventReason } from './types.ts';
 
 /**
  * What an alarm is about, for the alarm book and its screen (the app's run/alarmBook.ts uses
@@ -29,7 +29,7 @@ const DRY_POT = `If the pot is nearly dry, stop heating: never distil to dryness
  * plateau), when a plan or the app knows it; temperatures on the reader's scale (`figures`,
  * degC by default).
  */
-export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallReason | FaultReason | PlateauReason, receiver?: number, figures: Figures = figuresFor()): EventWording {
+export function wordWatchEvent(kind: EventKind, headC: number, reason?: EventReason, receiver?: number, figures: Figures = figuresFor()): EventWording {
   const degrees = (c: number): string => (Number.isFinite(c) ? ` at ${figures.temperature(c)}` : '');
   const to = receiver === undefined ? 'the next receiver' : `receiver ${receiver}`;
   switch (kind) {
@@ -55,6 +55,9 @@ export function wordWatchEvent(kind: EventKind, headC: number, reason?: StallRea
     case 'breakthrough':
       return { category: 'change-receiver', message: `Temperature rising off the plateau${degrees(headC)}`, action: `Change to ${to}` };
     case 'cut':
+      if (reason === 'settled') {
+        return { category: 'change-receiver', message: `Steady${degrees(headC)}, just short of the next main cut's planned window: that cut begins`, action: `Change to ${to}` };
+      }
       return { category: 'change-receiver', message: `Planned cut reached${degrees(headC)}`, action: `Change to ${to}` };
     case 'stall':
       if (reason === 'no-vapour') {

@@ -7,4 +7,4 @@ export { parseCutPlan, parseWatchContext } from './parseCutPlan.ts';
 export { cusumThresholdForMeanTime, cusumMeanTimeToFalseAlarmS } from './cusumThreshold.ts';
 export { wordWatchEvent, sensorSilentWording, isAlarmKind, type AlarmCategory, type EventWording } from './eventWording.ts';
 export type { WatcherState } from './watcherState.ts';
-export type { CutWindow, EventKind, ExpectedPlateau, FaultReason, InvalidReason, PlateauReason, StallReason, WatchContext, WatchEvent, WatchState } from './types.ts';
+export type { CutReason, CutWindow, EventKind, EventReason, ExpectedPlateau, FaultReason, InvalidReason, PlateauReason, StallReason, WatchContext, WatchEvent, WatchState } from './types.ts';

@@ -5,7 +5,7 @@ import { onAcceptedReading, restartSlowFit } from './stateMachine.ts';
 import { spikeFilterPush, spikeFilterReset } from './spikeFilter.ts';
 import { createStuckReadings, pushStuckReading } from './stuckReading.ts';
 import { watcherStateFromJson, watcherStateToJson } from './stateJson.ts';
-import type { CutWindow, EventKind, FaultReason, InvalidReason, PlateauReason, StallReason, WatchContext, WatchEvent, WatchState } from './types.ts';
+import type { CutWindow, EventKind, EventReason, FaultReason, InvalidReason, WatchContext, WatchEvent, WatchState } from './types.ts';
 import { resolveWatcherOptions, type WatcherOptions } from './watcherOptions.ts';
 import { createWatcherState, type WatcherState } from './watcherState.ts';
 
@@ -211,7 +211,7 @@ export class RunWatcher {
    * Raises an event. Alarms of one kind closer than `minAlarmGapS` are suppressed so no alarm
    * can chatter whatever the state machine does. Returns whether it was raised.
    */
-  emit(timeS: number, kind: EventKind, headC: number, reason?: StallReason | FaultReason | PlateauReason, receiver?: number): boolean {
+  emit(timeS: number, kind: EventKind, headC: number, reason?: EventReason, receiver?: number): boolean {
     const s = this.s;
     const isAlarm = isAlarmKind(kind);
     if (isAlarm) {

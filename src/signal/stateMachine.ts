@@ -1,12 +1,12 @@
 import { cusumThresholdForMeanTime } from './cusumThreshold.ts';
 import { holdsLevel, isOutsideExpected, windowIndexAt } from './cutPlan.ts';
 import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewRegressionSlope, ewLevelNoisePerSd, ewSlopeNoisePerSd, restartEwRegression, type EwRegression } from './ewRegression.ts';
-import type { EventKind, FaultReason, PlateauReason, StallReason, WatchState } from './types.ts';
+import type { EventKind, EventReason, WatchState } from './types.ts';
 import { noClimbSag, type WatcherState } from './watcherState.ts';
 
 /** Where the state machine raises events and changes state (the watcher). */
 export interface EventSink {
-  emit(timeS: number, kind: EventKind, headC: number, reason?: StallReason | FaultReason | PlateauReason, receiver?: number): boolean;
+  emit(timeS: number, kind: EventKind, headC: number, reason?: EventReason, receiver?: number): boolean;
   setState(state: WatchState, timeS: number): void;
 }
 
@@ -192,7 +192,7 @@ function watchTypedCutIn(s: WatcherState, timeS: number, sink: EventSink): void 
   s.receiverIndex = index;
   s.cutSinceS = NaN;
   s.windowDwellS = 0;
-  sink.emit(timeS, 'cut', pairC, undefined, s.plan[index]!.receiver);
+  sink.emit(timeS, 'cut', pairC, pairC < s.plan[index]!.fromC ? 'settled' : undefined, s.plan[index]!.receiver);
 }
 
 function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
@@ -342,7 +342,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
     // cut begins here, not when the head climbs through the window.
     s.cutSinceS = NaN;
     s.windowDwellS = 0;
-    sink.emit(timeS, 'cut', levelC, undefined, receiver);
+    sink.emit(timeS, 'cut', levelC, levelC < s.plan[s.receiverIndex]!.fromC ? 'settled' : undefined, receiver);
   }
 }
 

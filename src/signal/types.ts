@@ -8,6 +8,11 @@ export type StallReason = 'no-vapour' | 'falling-away' | 'creeping';
 /** A plateau outside every expected plateau of the charge: a mixed stretch. */
 export type PlateauReason = 'mixed';
 export type FaultReason = 'no-valid-readings' | 'open-thermocouple' | 'erratic' | 'stuck';
+/** A planned cut found as the head settled on the next main cut's component, short of its
+ * window (the plan's estimate and the head's thermometer a degree or so apart). */
+export type CutReason = 'settled';
+/** Why an event was raised, where its kind alone does not say. */
+export type EventReason = StallReason | FaultReason | PlateauReason | CutReason;
 
 /** Why a reading carries no valid temperature: passed in, or found by the watcher. */
 export type InvalidReason = 'missing' | 'fault-code' | 'out-of-range';
@@ -53,7 +58,7 @@ export interface WatchEvent {
   message: string;
   /** What to do, in a few words (every alarm names its action). */
   action: string;
-  reason?: StallReason | FaultReason | PlateauReason;
+  reason?: EventReason;
   /** With a plan: the receiver to change to (breakthrough, cut) or the one collecting (plateau). */
   receiver?: number;
 }

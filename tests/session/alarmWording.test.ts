@@ -15,6 +15,13 @@ describe('wordEvent', () => {
     expect(worded && 'alarm' in worded && worded.alarm.action).toBe('Change to receiver 3');
   });
 
+  it('says a cut found as the head settled short of the planned window begins that main cut', () => {
+    const worded = wordEvent({ time_s: 1, event: 'cut', head_c: 75.12, reason: 'settled', receiver: 3 }, 2);
+    expect(worded && 'alarm' in worded && worded.alarm).toEqual({
+      kind: 'change-receiver', message: "Steady at 75.1 °C, just short of the next main cut's planned window: that cut begins", action: 'Change to receiver 3',
+    });
+  });
+
   it('makes a head falling away a pot-low alarm that says never to distil to dryness and defers to the lab', () => {
     const worded = wordEvent({ time_s: 1, event: 'stall', head_c: 70, reason: 'falling-away' }, 2);
     expect(worded && 'alarm' in worded && worded.alarm.kind).toBe('pot-low');

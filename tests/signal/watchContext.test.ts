@@ -148,7 +148,8 @@ describe('RunWatcher with a cut plan', () => {
     const events = analyzeReadings(timeS, headC, { plan, expectedPlateaus: namedBands });
     const plateau = events.find((e) => e.kind === 'plateau')!;
     const cut = events.find((e) => e.kind === 'cut')!;
-    expect([cut.timeS, cut.receiver]).toEqual([plateau.timeS, 2]);
+    expect([cut.timeS, cut.receiver, cut.reason]).toEqual([plateau.timeS, 2, 'settled']);
+    expect(cut.message).toMatch(/just short of the next main cut's planned window/);
     expect(alarms(events)).toEqual(['vapour:1', 'cut:2', 'breakthrough:3', 'cut:4']);
     // Without the compounds the plateau is taken for the intermediate fraction, as before: the
     // breakthrough names the light component's receiver, and the climb through its window a third.
@@ -165,7 +166,7 @@ describe('RunWatcher with a cut plan', () => {
     const events = analyzeReadings(timeS, Float64Array.from(readings), { plan, expectedPlateaus: namedBands });
     expect(alarms(events)).toEqual(['vapour:1', 'breakthrough:2', 'cut:3']);
     const cut = events.find((e) => e.kind === 'cut')!;
-    expect(cut.timeS).toBe(timeS[13]);
+    expect([cut.timeS, cut.reason]).toEqual([timeS[13], 'settled']);
     expect(cut.timeS).toBeLessThan(events.filter((e) => e.kind === 'plateau').at(-1)!.timeS);
   });
 
