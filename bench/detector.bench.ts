@@ -119,6 +119,7 @@ function printTable(): void {
     ['false alarms per hour (<= 0.05)', (c) => f3(c.all.falseAlarmsPerHour)],
     // Our addition (truthWindows): a planned cut into the next component's plateau as it begins.
     ['  the same, cuts into a next plateau not false', (c) => `${f3(c.withCutIns.falseAlarmsPerHour)} (${c.withCutIns.falseAlarmCount})`],
+    ['  cuts into a next plateau raised (share)', (c) => f3(c.withCutIns.cutInRecall)],
     ['breakthrough latency median, s', (c) => f1(c.all.latencyMedianS)],
     ['breakthrough latency p90, s', (c) => f1(c.all.latencyP90S)],
     ['<= 2 s readings: breakthrough recall (>= 0.95)', (c) => f3(c.fast.recall.breakthrough)],

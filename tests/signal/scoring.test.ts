@@ -56,7 +56,9 @@ describe('scoreRun', () => {
     const issueOnly = scoreRun(windows.alarms, windows.plateaus, events);
     expect(issueOnly.falseAlarmCount).toBe(1);
     const withCutIns = scoreRun(windows.alarms, windows.plateaus, events, windows.cutIns);
-    expect([withCutIns.falseAlarmCount, withCutIns.cutInHitCount]).toEqual([0, 1]);
+    expect([withCutIns.falseAlarmCount, withCutIns.cutInHitCount, withCutIns.cutInCount]).toEqual([0, 1, 1]);
+    expect(summariseScores([withCutIns, scoreRun(windows.alarms, windows.plateaus, [], windows.cutIns)], 1).cutInRecall).toBe(0.5);
+    expect(summariseScores([issueOnly], 1).cutInRecall).toBeNaN();
     expect(withCutIns.truthCount).toEqual(issueOnly.truthCount);
     expect(withCutIns.hitCount).toEqual(issueOnly.hitCount);
     // A second cut in the same window is a nuisance (false too).

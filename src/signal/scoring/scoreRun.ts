@@ -24,6 +24,8 @@ export interface RunScore {
   breakthroughLatencyS: number[];
   /** Planned cuts that took a cut-in window (given one): counted neither false nor in recall. */
   cutInHitCount: number;
+  /** Cut-in windows given. */
+  cutInCount: number;
 }
 
 /**
@@ -38,7 +40,7 @@ export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly Pla
   const zero = (): Record<ScoredAlarmKind, number> => ({ vapour: 0, breakthrough: 0, stall: 0, 'sensor-fault': 0 });
   const score: RunScore = {
     truthCount: zero(), hitCount: zero(), plateauTruthCount: plateaus.length, plateauHitCount: 0,
-    falseAlarmCount: 0, nuisanceAlarmCount: 0, breakthroughLatencyS: [], cutInHitCount: 0,
+    falseAlarmCount: 0, nuisanceAlarmCount: 0, breakthroughLatencyS: [], cutInHitCount: 0, cutInCount: cutIns.length,
   };
   const isCutInHit = cutIns.map(() => false);
   for (const w of windows) score.truthCount[w.kind]++;

@@ -12,6 +12,8 @@ export interface ScoreSummary {
   /** Breakthrough latency, median and 90th percentile (nearest rank). Units: s. */
   latencyMedianS: number;
   latencyP90S: number;
+  /** Cut-in windows taken by a planned cut, of those given (our addition); NaN for none given. */
+  cutInRecall: number;
 }
 
 /** Pools run scores; `hours` is the total length of the runs scored. */
@@ -38,8 +40,11 @@ export function summariseScores(scores: readonly RunScore[], hours: number): Sco
     nuisanceAlarmCount: scores.reduce((sum, s) => sum + s.nuisanceAlarmCount, 0),
     latencyMedianS: percentile(latencies, 0.5),
     latencyP90S: percentile(latencies, 0.9),
+    cutInRecall: ratio(scores.reduce((sum, s) => sum + s.cutInHitCount, 0), scores.reduce((sum, s) => sum + s.cutInCount, 0)),
   };
 }
+
+const ratio = (part: number, whole: number): number => (whole > 0 ? part / whole : NaN);
 
 /** Nearest-rank percentile of ascending values; NaN for none. */
 export function percentile(ascending: readonly number[], fraction: number): number {
