@@ -71,10 +71,12 @@ describe('scoreRun', () => {
   it('truthWindows gives a first purity interval a cut-in window only when a mixed fraction came over before it', () => {
     // The first distillate pure 50 s after the vapour (100 s): the first receiver takes it.
     expect(truthWindows(handTruth(), 1, false).cutIns).toEqual([]);
-    // Pure only from 400 s, five minutes of mixed distillate after the vapour: the plan's first
-    // receiver is an intermediate one, and the cut into the main cut comes as this one begins.
-    const late = { ...handTruth(), purityIntervals: [{ startS: 400, endS: 600, component: 'b' }] };
-    expect(truthWindows(late, 1, false).cutIns).toEqual([{ timeS: 400, fromS: 340, toS: 640 }]);
+    // Pure only from 500 s, nearly seven minutes of mixed distillate after the vapour: the plan's
+    // first receiver is an intermediate one, and the cut into the main cut comes as this one begins.
+    const late = { ...handTruth(), purityIntervals: [{ startS: 500, endS: 650, component: 'b' }] };
+    expect(truthWindows(late, 1, false).cutIns).toEqual([{ timeS: 500, fromS: 440, toS: 740 }]);
+    // Pure from 400 s, five minutes after the vapour: still the first drops (a slow arrival).
+    expect(truthWindows({ ...handTruth(), purityIntervals: [{ startS: 400, endS: 650, component: 'b' }] }, 1, false).cutIns).toEqual([]);
   });
 
   it('scoreRun counts a second alarm in a hit window as nuisance and false, and a stray as false', () => {
