@@ -271,7 +271,9 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   const previousC = s.typedPrevC ?? NaN;
   const pairC = s.typedPairC ?? NaN;
   s.typedPrevC = valueC;
-  s.typedPairC = Math.abs(valueC - previousC) <= TYPED_PAIR_C ? (valueC + previousC) / 2 : NaN;
+  // A reading below the pair that pairs with nothing is a pre-cut sag: the pair still stands
+  // for the rise after it (a component read twice, one reading a degree low, then the climb).
+  s.typedPairC = Math.abs(valueC - previousC) <= TYPED_PAIR_C ? (valueC + previousC) / 2 : valueC < pairC ? pairC : NaN;
   // One reading step more than the deadband: a typed reading a step up may be rounding only.
   const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
   if (!(valueC >= pairC + s.options.breakthroughMinRiseC + stepC)) return false;
