@@ -505,6 +505,9 @@ function isLeavingPlateau(s: WatcherState, timeS: number): boolean {
 function raiseBreakthrough(s: WatcherState, timeS: number, levelC: number, fastC: number, sink: EventSink): void {
   s.brokeFromC = levelC;
   let receiver: number | undefined;
+  // A stretch never declared a plateau (a climb's sag or knee, a typed pair) is placed by its
+  // level as a declared one would have been.
+  if (s.plan.length > 0 && s.state !== 'plateau') s.receiverIndex = plateauWindowIndex(s, levelC);
   if (s.plan.length > 0 && s.receiverIndex + 1 < s.plan.length) {
     s.receiverIndex++;
     receiver = s.plan[s.receiverIndex]!.receiver;
@@ -647,6 +650,10 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
     s.cutSinceS = NaN;
     return;
   }
+  if (s.state !== 'plateau' && isKneeOfNextCut(s, timeS)) {
+    s.cutSinceS = NaN;
+    return;
+  }
   if (Number.isNaN(s.cutSinceS)) s.cutSinceS = timeS;
   // Sparse (typed) readings cannot wait for a second one: the crossing itself is the cut.
   if (timeS - s.cutSinceS < (s.intervalS >= CUT_HOLD_S ? 0 : CUT_HOLD_S)) return;
@@ -662,6 +669,20 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
     sink.setState('leaving', timeS);
   }
   sink.emit(timeS, 'cut', fastC, undefined, s.plan[s.receiverIndex]!.receiver);
+}
+
+/**
+ * A slow stretch of the climb (watchClimbKnee) long enough to be a cut, placed (by its mean) at
+ * or beyond the window the head is crossing into: the head is leaving that component, not
+ * arriving, and the knee's breakthrough will name the receiver after it.
+ */
+function isKneeOfNextCut(s: WatcherState, timeS: number): boolean {
+  const sinceS = s.kneeSinceS ?? NaN;
+  if (!Number.isFinite(sinceS) || !((s.kneeCount ?? 0) > 0)) return false;
+  const endS = Number.isFinite(s.kneeEndS ?? NaN) ? s.kneeEndS! : timeS;
+  if (endS - sinceS < Math.max(KNEE_HOLD_S, 2 * s.intervalS)) return false;
+  const index = plateauWindowIndex(s, s.kneeSumC! / s.kneeCount!);
+  return index > s.receiverIndex && typeof s.plan[index]!.compound === 'string';
 }
 
 // An on-delay: `condition` must hold from `fallSinceS` for `holdS` (one timer: the states
