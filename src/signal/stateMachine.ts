@@ -110,6 +110,13 @@ const CLIMB_SAG_C = 0.8;
 const CLIMB_SAG_NOISE_SDS = 3;
 const CLIMB_SAG_HOLD_S = 10;
 const CLIMB_SAG_WITHIN_S = 180;
+/** With no plateau seen yet, a climb's sag counts from this long after the vapour came: the
+ * arrival's overshoot (seconds) and the head's settling onto a first plateau are over, and a
+ * climb that never settled (a few-plate column, or a first cut the plan announced) still ends
+ * each cut in a sag. Two minutes: simulated corpus, one breakthrough more on seed 7 (every
+ * column) and one false alarm fewer on seed 20251201 with the plan, no false alarm more on three
+ * seeds of either corpus; 60 s, the same. Units: s. */
+const SAG_AFTER_VAPOUR_S = 120;
 /** A knee in a climb (watchClimbKnee): slower than 0.04 degC/s (2.4 degC/min) for a minute, then
  * within 2 minutes of the stretch's end faster than a breakthrough's 6 degC/min. Chosen on the
  * simulated corpus of two seeds (20251201 and 7), with the charge known: at 0.03 degC/s one
@@ -522,12 +529,13 @@ function raiseBreakthrough(s: WatcherState, timeS: number, levelC: number, fastC
  * or so as the lighter component runs out and then climbing as the next one arrives. A sag of
  * CLIMB_SAG_C below the climb's peak, held, then the head a breakthrough's rise above that peak
  * within CLIMB_SAG_WITHIN_S, is that stretch's breakthrough, its level the peak. Only once a
- * plateau has been seen (the arrival's overshoot is no cut), and with the plateau rules: none
+ * plateau has been seen or SAG_AFTER_VAPOUR_S after the vapour (the arrival's overshoot is no
+ * cut), and with the plateau rules: none
  * within a shoulder of the last breakthrough's level, off a mixed level, or off the last one.
  * Returns whether it raised one.
  */
 function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: number, sink: EventSink): boolean {
-  if (!Number.isFinite(s.levelC)) return false;
+  if (!(Number.isFinite(s.levelC) || timeS - s.vapourTimeS >= SAG_AFTER_VAPOUR_S)) return false;
   // States saved before the sag existed carry none: it starts here then.
   const sag = (s.climbSag ??= noClimbSag());
   if (Number.isNaN(sag.fromC)) {
@@ -650,7 +658,7 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
     s.cutSinceS = NaN;
     return;
   }
-  if (s.state !== 'plateau' && isKneeOfNextCut(s, timeS)) {
+  if (s.state !== 'plateau' && isLeavingNextCut(s, timeS)) {
     s.cutSinceS = NaN;
     return;
   }
@@ -672,17 +680,23 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
 }
 
 /**
- * A slow stretch of the climb (watchClimbKnee) long enough to be a cut, placed (by its mean) at
- * or beyond the window the head is crossing into: the head is leaving that component, not
- * arriving, and the knee's breakthrough will name the receiver after it.
+ * A stretch of the climb never declared a plateau that the next main cut's component holds
+ * (plateauWindowIndex, at or beyond the window the head is crossing into), ending now: a climb's
+ * sag waiting for its rise (watchClimbSag), or a slow stretch long enough to be a cut
+ * (watchClimbKnee). The head is leaving that component, not arriving, and the stretch's own
+ * breakthrough will name the receiver after it.
  */
-function isKneeOfNextCut(s: WatcherState, timeS: number): boolean {
+function isLeavingNextCut(s: WatcherState, timeS: number): boolean {
+  const isNextCut = (levelC: number): boolean => {
+    const index = plateauWindowIndex(s, levelC);
+    return index > s.receiverIndex && typeof s.plan[index]!.compound === 'string';
+  };
+  const sag = s.climbSag;
+  if (sag && Number.isFinite(sag.fromC) && timeS - sag.atS <= CLIMB_SAG_WITHIN_S && isNextCut(sag.fromC)) return true;
   const sinceS = s.kneeSinceS ?? NaN;
   if (!Number.isFinite(sinceS) || !((s.kneeCount ?? 0) > 0)) return false;
   const endS = Number.isFinite(s.kneeEndS ?? NaN) ? s.kneeEndS! : timeS;
-  if (endS - sinceS < Math.max(KNEE_HOLD_S, 2 * s.intervalS)) return false;
-  const index = plateauWindowIndex(s, s.kneeSumC! / s.kneeCount!);
-  return index > s.receiverIndex && typeof s.plan[index]!.compound === 'string';
+  return endS - sinceS >= Math.max(KNEE_HOLD_S, 2 * s.intervalS) && isNextCut(s.kneeSumC! / s.kneeCount!);
 }
 
 // An on-delay: `condition` must hold from `fallSinceS` for `holdS` (one timer: the states

@@ -413,6 +413,21 @@ describe('RunWatcher breakthrough timing', () => {
     }
   });
 
+  it('a climb never declared a plateau that sags and rises again alarms on the rise after the sag, before any plateau', () => {
+    // Invented: vapour at 55 degC, a climb of 3 degC/min that never settles, a creep of 1.2
+    // degC/min, a sag of 1.5 degC over half a minute, then the climb on to the next component.
+    for (const seed of [5, 6, 7]) {
+      const { timeS, headC, truthC } = through([[0, 20], [300, 20], [320, 55], [620, 70], [740, 72.4], [752, 71.4], [764, 70.9], [776, 71.6], [790, 73.4], [830, 76.5], [900, 95], [1500, 95.2]], seed);
+      const events = analyzeReadings(timeS, headC);
+      expect(events.some((e) => e.kind === 'plateau' && e.timeS < 900)).toBe(false);
+      const breakthroughs = events.filter((e) => e.kind === 'breakthrough');
+      expect(breakthroughs).toHaveLength(1);
+      const dueS = crossing(truthC, 73.4, 776);
+      expect(breakthroughs[0]!.timeS).toBeGreaterThan(dueS - 60);
+      expect(breakthroughs[0]!.timeS).toBeLessThan(dueS + 30);
+    }
+  });
+
   it('a climb that slows down and speeds up again with no creep of a minute has no knee', () => {
     // 5 degC/min for 20 min, one minute at 1.5 degC/min in the middle, after a breakthrough.
     const { timeS, headC } = through([[0, 20], [300, 20], [320, 60], [1200, 60.2], [1260, 66], [1860, 76], [1905, 77.1], [2505, 87.1], [3000, 87.3]]);
