@@ -192,14 +192,29 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
  * readings more, minutes of the main cut run into the intermediate receiver.
  */
 function watchTypedCutIn(s: WatcherState, timeS: number, sink: EventSink): void {
+  if (!(s.intervalS >= s.options.handIntervalS)) return;
   const pairC = s.typedPairC ?? NaN;
-  if (!(s.intervalS >= s.options.handIntervalS) || !Number.isFinite(pairC)) return;
+  if (!Number.isFinite(pairC)) return;
   const index = plateauWindowIndex(s, pairC);
-  if (!(index > s.receiverIndex && typeof s.plan[index]!.compound === 'string')) return;
+  if (isMainCutAhead(s, index)) raiseCutInto(s, timeS, index, pairC, sink);
+}
+
+/** A main cut's window (it names its compound) after the current receiver's. */
+function isMainCutAhead(s: WatcherState, index: number): boolean {
+  return index > s.receiverIndex && typeof s.plan[index]!.compound === 'string';
+}
+
+/**
+ * The head has settled on the component of the main cut at `index` (plateauWindowIndex), short
+ * of its window or inside it without crossing into it: that cut begins here, not when the head
+ * climbs through the window ('settled' when short of it).
+ */
+function raiseCutInto(s: WatcherState, timeS: number, index: number, headC: number, sink: EventSink): void {
   s.receiverIndex = index;
   s.cutSinceS = NaN;
   s.windowDwellS = 0;
-  sink.emit(timeS, 'cut', pairC, pairC < s.plan[index]!.fromC ? 'settled' : undefined, s.plan[index]!.receiver);
+  const window = s.plan[index]!;
+  sink.emit(timeS, 'cut', headC, headC < window.fromC ? 'settled' : undefined, window.receiver);
 }
 
 function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
@@ -338,21 +353,14 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.stallReason = null;
   sink.setState('plateau', timeS);
   let receiver: number | undefined;
-  let isCutIn = false;
-  if (s.plan.length > 0) {
-    const index = plateauWindowIndex(s, levelC);
-    isCutIn = index > s.receiverIndex && typeof s.plan[index]!.compound === 'string';
+  const index = s.plan.length > 0 ? plateauWindowIndex(s, levelC) : -1;
+  const isCutIn = index >= 0 && isMainCutAhead(s, index);
+  if (index >= 0) {
     s.receiverIndex = index;
     receiver = s.plan[index]!.receiver;
   }
   sink.emit(timeS, 'plateau', levelC, isMixedLevel(s, levelC) ? 'mixed' : undefined, receiver);
-  if (isCutIn) {
-    // The head has settled on the next main cut's component short of its planned window: that
-    // cut begins here, not when the head climbs through the window.
-    s.cutSinceS = NaN;
-    s.windowDwellS = 0;
-    sink.emit(timeS, 'cut', levelC, levelC < s.plan[s.receiverIndex]!.fromC ? 'settled' : undefined, receiver);
-  }
+  if (isCutIn) raiseCutInto(s, timeS, index, levelC, sink);
 }
 
 /**
@@ -687,10 +695,7 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
  * breakthrough will name the receiver after it.
  */
 function isLeavingNextCut(s: WatcherState, timeS: number): boolean {
-  const isNextCut = (levelC: number): boolean => {
-    const index = plateauWindowIndex(s, levelC);
-    return index > s.receiverIndex && typeof s.plan[index]!.compound === 'string';
-  };
+  const isNextCut = (levelC: number): boolean => isMainCutAhead(s, plateauWindowIndex(s, levelC));
   const sag = s.climbSag;
   if (sag && Number.isFinite(sag.fromC) && timeS - sag.atS <= CLIMB_SAG_WITHIN_S && isNextCut(sag.fromC)) return true;
   const sinceS = s.kneeSinceS ?? NaN;
