@@ -14,7 +14,7 @@ import { createRandom } from '../src/science/sensorModel/index.ts';
 import type { PurityInterval, RunTruth, TruthEvent } from '../src/signal/scoring/index.ts';
 import type { CorpusRunSpec, TruthSource, TruthSourceResult } from './corpus.ts';
 
-const VERSION = 'sim-truth-3';
+const VERSION = 'sim-truth-4';
 const CACHE_DIR = '.bench/simulated-truth';
 
 /** How a spec becomes a simulation: charge, reflux, boil-up and the heat schedule. */
@@ -170,7 +170,8 @@ function build(spec: CorpusRunSpec): RunTruth {
       const offS = first.fromS + 300 + (Math.min(dry, normal.annotations.plateaus.at(-1)!.toS) - first.fromS - 600) * r.uniform();
       const tailS = 900 + 600 * r.uniform();
       const run = simulate(plan, spec, (w) => [{ fromS: 0, heatW: w }, { fromS: offS, heatW: 0 }], offS + tailS);
-      return truthFrom(run, plan, spec, offS + tailS, [{ kind: 'stall', timeS: offS, cause: 'heat-lost' }]);
+      const stall = heatLostStall(offS, run.annotations.potDryS);
+      return truthFrom(run, plan, spec, stall.timeS + tailS, [stall]);
     }
     case 'pot-dry': {
       const run = simulate(plan, spec, steady, durationS);
@@ -185,6 +186,17 @@ function build(spec: CorpusRunSpec): RunTruth {
       return truthFrom(run, plan, spec, endBeforeDry(run, durationS), []);
     }
   }
+}
+
+/**
+ * The stall a heat-lost run records: the heat going off at `offS`, unless its pot ran dry first
+ * (`potDryS`). The normal run the moment is drawn from may end before its pot would run dry, and
+ * a heat loss drawn after that comes when the head has already fallen away: that stall is the
+ * dry pot's, at its own time.
+ */
+export function heatLostStall(offS: number, potDryS: number | null): TruthEvent {
+  if (potDryS !== null && potDryS < offS) return { kind: 'stall', timeS: potDryS, cause: 'pot-dry' };
+  return { kind: 'stall', timeS: offS, cause: 'heat-lost' };
 }
 
 // A normal run ends as the chemist stops heating, a little before the pot would run dry.
