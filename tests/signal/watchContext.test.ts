@@ -124,6 +124,17 @@ describe('RunWatcher with a cut plan', () => {
     }
   });
 
+  it('a noisy board on a plateau just under its window top raises no cut: off a plateau the cut needs the breakthrough\'s evidence', () => {
+    // Demo scenario: 5 s readings with 0.45 degC of noise, the plateau 0.7 degC under the top.
+    // Two high readings in a row cross the top and the deadband; they are no rise.
+    const noisy = syntheticTruth({ roomC: 20, vapourArrivalS: 300, arrivalTauS: 8, plateaus: [{ levelC: 56.1, durationS: 2400, riseS: 150 }, { levelC: 99.5, durationS: 1200 }] });
+    const plan = [{ receiver: 1, fromC: 54, toC: 56.8 }, { receiver: 2, fromC: 56.8, toC: 97 }, { receiver: 3, fromC: 97, toC: 102 }];
+    for (let seed = 1; seed <= 20; seed++) {
+      const r = sensorReadings(noisy.timeS, noisy.headC, { seed, intervalS: 5, noiseSdC: 0.45 });
+      expect(alarms(analyzeReadings(r.timeS, r.headC, plan)), `seed ${seed}`).toEqual(['vapour:1', 'breakthrough:2', 'cut:3']);
+    }
+  });
+
   it('raises no cut while the head holds above a window the plan placed too low: the breakthrough is the cut', () => {
     const tooLow = [{ receiver: 1, fromC: 50, toC: 55 }, { receiver: 2, fromC: 55, toC: 97 }, { receiver: 3, fromC: 97, toC: 102 }];
     const events = analyzeReadings(timeS, headC, tooLow);
