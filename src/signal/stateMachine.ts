@@ -166,12 +166,13 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
   }
   // A planned cut is the head climbing through a window's top: between plateaus, or off a
   // plateau once the head is a breakthrough's rise above it (a window top under a steady head is
-  // the plan missing the plateau the head found, not a cut; off a plateau the cut is that
-  // plateau's breakthrough, and with sensor readings waits for its evidence too, the CUSUM or
-  // the sharp slope: a noisy board's two high readings cross a window top just above the level.
-  // Typed readings keep the crossing, the CUSUM being slow on a few readings). Before the first plateau the head must have spent a plateau's hold
-  // in the window first: vapour arriving passes through the first window in seconds, and a
-  // first plateau that settles just above its window is still the first component.
+  // the plan missing the plateau the head found, not a cut). Off a plateau the cut is that
+  // plateau's breakthrough, and with sensor readings it waits for the breakthrough's evidence
+  // too (the CUSUM or the sharp slope): a noisy board's two high readings cross a window top
+  // just above the level. Typed readings keep the crossing: on a few readings the CUSUM is slow.
+  // Before the first plateau the head must have spent a plateau's hold in the window first:
+  // vapour arriving passes through the first window in seconds, and a first plateau that
+  // settles just above its window is still the first component.
   if (s.plan.length > 0 && s.receiverIndex >= 0) {
     // The lesser of the fast fit and the reading, as for the peak (watchRising): the fit
     // overshoots where a steep climb stops, by degrees, for seconds.
