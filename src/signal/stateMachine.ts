@@ -127,6 +127,9 @@ const KNEE_SLOW_C_PER_S = 0.04;
 const KNEE_EXIT_C_PER_S = 0.1;
 const KNEE_HOLD_S = 60;
 const KNEE_WITHIN_S = 120;
+/** A sag's or knee's breakthrough this soon after a climb crossed out of a main cut's window,
+ * from just above it, is the rise that cut announced (isLeftMainCut). Units: s. */
+const LEFT_MAIN_CUT_S = 200;
 /** With no plateau seen yet, a knee counts from this long after the vapour came: the arrival's
  * slowing onto the first plateau is over by then, and a first cut that creeps from its start
  * (never a plateau) still ends in one. Three minutes: one breakthrough more on each seed, no
@@ -303,7 +306,7 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
   if (!(valueC >= pairC + s.options.breakthroughMinRiseC + stepC)) return false;
   s.typedPairC = NaN;
-  if (!isOwnCut(s, pairC, PAUSE_C)) return false;
+  if (!isOwnCut(s, timeS, pairC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, pairC, valueC, sink);
   return true;
 }
@@ -416,10 +419,21 @@ function isShortColumnClimb(s: WatcherState, levelC: number): boolean {
 /**
  * The plateau rules for a stretch the watcher never declared a plateau (a climb's sag or knee, a
  * typed pair): it raises a breakthrough of its own unless it lies within `sameClimbC` above the
- * level the last breakthrough left (the same climb), at a mixed level, or at the last one.
+ * level the last breakthrough left (the same climb), at a mixed level, at the last one, or just
+ * above a main cut's window a climb has just been cut out of (isLeftMainCut).
  */
-function isOwnCut(s: WatcherState, levelC: number, sameClimbC: number): boolean {
-  return !(levelC < (s.brokeFromC ?? NaN) + sameClimbC || isMixedLevel(s, levelC) || isLastLevel(s, levelC));
+function isOwnCut(s: WatcherState, timeS: number, levelC: number, sameClimbC: number): boolean {
+  return !(levelC < (s.brokeFromC ?? NaN) + sameClimbC || isMixedLevel(s, levelC) || isLastLevel(s, levelC) || isLeftMainCut(s, timeS, levelC, sameClimbC));
+}
+
+/**
+ * A stretch within `sameClimbC` above the main cut's window a climb crossed out of in the last
+ * LEFT_MAIN_CUT_S: the slow stretch that crossing ended (the cut announced that rise), not a cut
+ * of its own. Later, the crossing was early (a head creeping over its window's top as the
+ * component still comes over) and the stretch's own breakthrough is the cut.
+ */
+function isLeftMainCut(s: WatcherState, timeS: number, levelC: number, sameClimbC: number): boolean {
+  return levelC < (s.leftMainCutC ?? NaN) + sameClimbC && timeS - (s.leftMainCutS ?? NaN) <= LEFT_MAIN_CUT_S;
 }
 
 function watchPlateau(s: WatcherState, timeS: number, valueC: number, dtS: number, fastC: number, sink: EventSink): void {
@@ -571,7 +585,7 @@ function watchClimbSag(s: WatcherState, timeS: number, valueC: number, fastC: nu
   if (!(Math.min(fastC, valueC) >= sag.fromC + s.options.breakthroughMinRiseC)) return false;
   const levelC = sag.fromC;
   sag.fromC = NaN;
-  if (!isOwnCut(s, levelC, SHOULDER_C)) return false;
+  if (!isOwnCut(s, timeS, levelC, SHOULDER_C)) return false;
   raiseBreakthrough(s, timeS, levelC, fastC, sink);
   return true;
 }
@@ -619,7 +633,7 @@ function watchClimbKnee(s: WatcherState, timeS: number, valueC: number, fastC: n
   const levelC = s.kneeSumC! / s.kneeCount!;
   if (!(slopeCPerS > KNEE_EXIT_C_PER_S && Math.min(fastC, valueC) >= levelC + s.options.breakthroughMinRiseC)) return false;
   s.kneeSinceS = NaN;
-  if (!isOwnCut(s, levelC, PAUSE_C)) return false;
+  if (!isOwnCut(s, timeS, levelC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, levelC, fastC, sink);
   return true;
 }
@@ -679,7 +693,8 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
   s.cutSinceS = NaN;
   s.windowDwellS = 0;
   s.receiverIndex = Math.max(s.receiverIndex + 1, windowIndexAt(s.plan, fastC));
-  if (s.state === 'plateau') {
+  const isClimbing = s.state !== 'plateau';
+  if (!isClimbing) {
     // The plateau's end, announced by the plan: no breakthrough after it for the same rise.
     s.brokeFromC = s.levelC;
     s.peakC = fastC;
@@ -687,7 +702,14 @@ function watchPlannedCut(s: WatcherState, timeS: number, fastC: number, sink: Ev
     s.fallSinceS = NaN;
     sink.setState('leaving', timeS);
   }
-  sink.emit(timeS, 'cut', fastC, undefined, s.plan[s.receiverIndex]!.receiver);
+  const isRaised = sink.emit(timeS, 'cut', fastC, undefined, s.plan[s.receiverIndex]!.receiver);
+  // A climb out of a main cut's window, announced, is that cut's end (isLeftMainCut). One held
+  // back as a second cut within the minute and a half announces nothing, and before any plateau
+  // the head may still be settling onto the first component above a window planned under it.
+  if (isClimbing && isRaised && typeof window.compound === 'string' && Number.isFinite(s.levelC)) {
+    s.leftMainCutC = window.toC;
+    s.leftMainCutS = timeS;
+  }
 }
 
 /**

@@ -59,6 +59,10 @@ export interface WatcherState {
   course?: EwRegression;
   /** Level of the plateau the last breakthrough left (NaN before any). Units: degC. */
   brokeFromC: number;
+  /** The top of the main cut's window a climb last crossed out of, and when (the cut that ended
+   * that main cut while no plateau was declared). NaN: none. Absent in older saves. Units: degC, s. */
+  leftMainCutC?: number;
+  leftMainCutS?: number;
   /** The current plateau is a shoulder of the climb out of that one: it raises no breakthrough. */
   isShoulder: boolean;
   hasRaisedNoVapour: boolean;

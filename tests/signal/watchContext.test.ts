@@ -212,6 +212,36 @@ describe('RunWatcher with a cut plan', () => {
     }
   });
 
+  it('with named cuts, a climb that creeps out of a main cut\'s window is cut once: the slow stretch just above raises no breakthrough', () => {
+    // Invented: the light cut at 56 degC, then the middle component creeping through its window
+    // (68-70 degC) at 1.3 degC/min, never steady, on over its top at the same pace, then the
+    // climb to the heavy one. The cut out of the window announced that rise: the creep's knee
+    // just above it is the same rise, and its breakthrough named the heavy receiver at 81 degC.
+    const points: [number, number][] = [[0, 20], [300, 20], [320, 56], [1200, 56.2], [1260, 66], [1280, 68.2], [1390, 70.6], [1450, 72.0], [1480, 78], [1540, 97], [1600, 99.5], [2400, 99.6]];
+    const at = (t: number): number => {
+      const k = points.findIndex(([pt]) => pt > t);
+      if (k <= 0) return points[k < 0 ? points.length - 1 : 0]![1];
+      const [t0, v0] = points[k - 1]!, [t1, v1] = points[k]!;
+      return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
+    };
+    const truthTimeS = Float64Array.from({ length: 2401 }, (_, i) => i);
+    const bands3: ExpectedPlateau[] = [{ label: 'light', fromC: 52, toC: 62 }, { label: 'mid', fromC: 64, toC: 74 }, { label: 'heavy', fromC: 95, toC: 104 }];
+    const plan = [
+      { receiver: 1, fromC: 53, toC: 57, compound: 'light' }, { receiver: 2, fromC: 57, toC: 68, compound: null }, { receiver: 3, fromC: 68, toC: 70, compound: 'mid' },
+      { receiver: 4, fromC: 70, toC: 97, compound: null }, { receiver: 5, fromC: 97, toC: 102, compound: 'heavy' },
+    ];
+    let crossed = 0;
+    for (let seed = 1; seed <= 10; seed++) {
+      const r = sensorReadings(truthTimeS, truthTimeS.map(at), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
+      const found = alarms(analyzeReadings(r.timeS, r.headC, { plan, expectedPlateaus: bands3 }));
+      // Either the crossing out of the window is the cut, and the heavy window's its own, or the
+      // creep's knee holds the crossing and its breakthrough is the one alarm.
+      expect([['vapour:1', 'breakthrough:2', 'cut:3', 'cut:4', 'cut:5'], ['vapour:1', 'breakthrough:2', 'cut:3', 'breakthrough:5']], `seed ${seed}`).toContainEqual(found);
+      if (found.includes('cut:4')) crossed++;
+    }
+    expect(crossed).toBeGreaterThan(0);
+  });
+
   it('with named cuts, a plateau further down the band than a thermometer reads off is no cut into the window above', () => {
     const plan = [{ receiver: 1, fromC: 30, toC: 58, compound: null }, { receiver: 2, fromC: 58, toC: 60, compound: 'light' }, { receiver: 3, fromC: 60, toC: 97, compound: null }, { receiver: 4, fromC: 97, toC: 102, compound: 'heavy' }];
     const events = analyzeReadings(timeS, headC, { plan, expectedPlateaus: namedBands });
