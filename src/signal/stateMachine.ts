@@ -170,9 +170,10 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
   // A planned cut is the head climbing through a window's top: between plateaus, or off a
   // plateau once the head is a breakthrough's rise above it (a window top under a steady head is
   // the plan missing the plateau the head found, not a cut). Off a plateau the cut is that
-  // plateau's breakthrough, and with sensor readings it waits for the breakthrough's evidence
-  // too (the CUSUM or the sharp slope): a noisy board's two high readings cross a window top
-  // just above the level. Typed readings keep the crossing: on a few readings the CUSUM is slow.
+  // plateau's breakthrough: with sensor readings it is the breakthrough itself (watchPlateau,
+  // which has left the plateau by now if its evidence, the CUSUM or the sharp slope, was there;
+  // a noisy board's two high readings cross a window top just above the level). Typed readings
+  // keep the crossing: on a few readings the CUSUM is slow.
   // Before the first plateau the head must have spent a plateau's hold in the window first:
   // vapour arriving passes through the first window in seconds, and a first plateau that
   // settles just above its window is still the first component.
@@ -185,7 +186,7 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
     else if (window && headC < window.toC + CUT_MARGIN_C) s.windowDwellS = (s.windowDwellS ?? 0) + dtS;
     const hasSettled = Number.isFinite(s.levelC) || (s.windowDwellS ?? 0) >= Math.max(s.options.plateauHoldS, s.intervalS);
     const isClimbing = (s.state === 'rising' || s.state === 'leaving') && hasSettled;
-    const isRisingOff = s.state === 'plateau' && headC - s.levelC >= s.options.breakthroughMinRiseC && (s.intervalS >= s.options.handIntervalS || isLeavingPlateau(s, timeS));
+    const isRisingOff = s.state === 'plateau' && s.intervalS >= s.options.handIntervalS && headC - s.levelC >= s.options.breakthroughMinRiseC;
     if (isClimbing || isRisingOff) watchPlannedCut(s, timeS, headC, sink);
     else s.cutSinceS = NaN;
     if (s.state === 'rising' || s.state === 'leaving') watchTypedCutIn(s, timeS, sink);
