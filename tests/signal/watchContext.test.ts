@@ -181,6 +181,20 @@ describe('RunWatcher with a cut plan', () => {
     expect(cut.timeS).toBeLessThan(events.filter((e) => e.kind === 'plateau').at(-1)!.timeS);
   });
 
+  // Three components for the tests below: a head that follows straight lines between `points`
+  // ([s, degC]) for 40 minutes, read every half second by a board with draughts and 0.25 degC steps.
+  const bands3: ExpectedPlateau[] = [{ label: 'light', fromC: 52, toC: 62 }, { label: 'mid', fromC: 64, toC: 74 }, { label: 'heavy', fromC: 95, toC: 104 }];
+  const trace = (points: [number, number][], seed: number) => {
+    const at = (t: number): number => {
+      const k = points.findIndex(([pt]) => pt > t);
+      if (k <= 0) return points[k < 0 ? points.length - 1 : 0]![1];
+      const [t0, v0] = points[k - 1]!, [t1, v1] = points[k]!;
+      return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
+    };
+    const truthTimeS = Float64Array.from({ length: 2401 }, (_, i) => i);
+    return sensorReadings(truthTimeS, truthTimeS.map(at), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
+  };
+
   it('with named cuts, a creeping cut never declared a plateau just below its window ends in one alarm naming the receiver after it', () => {
     // Invented: the light cut at 56 degC, a climb, then the middle component just below its
     // planned window, never steady: creeping 68.2 -> 68.9 degC for two minutes (a knee), or
@@ -188,17 +202,6 @@ describe('RunWatcher with a cut plan', () => {
     // to the heavy one.
     const knee: [number, number][] = [[0, 20], [300, 20], [320, 56], [1200, 56.2], [1260, 66], [1290, 68.2], [1410, 68.9], [1450, 75], [1560, 97], [1620, 99.5], [2400, 99.6]];
     const sag: [number, number][] = [[0, 20], [300, 20], [320, 56], [1200, 56.2], [1260, 64], [1380, 68.6], [1392, 67.6], [1404, 67.6], [1415, 68.2], [1445, 69.4], [1475, 70.2], [1520, 80], [1560, 97], [1620, 99.5], [2400, 99.6]];
-    const trace = (points: [number, number][], seed: number) => {
-      const at = (t: number): number => {
-        const k = points.findIndex(([pt]) => pt > t);
-        if (k <= 0) return points[k < 0 ? points.length - 1 : 0]![1];
-        const [t0, v0] = points[k - 1]!, [t1, v1] = points[k]!;
-        return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
-      };
-      const truthTimeS = Float64Array.from({ length: 2401 }, (_, i) => i);
-      return sensorReadings(truthTimeS, truthTimeS.map(at), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
-    };
-    const bands3: ExpectedPlateau[] = [{ label: 'light', fromC: 52, toC: 62 }, { label: 'mid', fromC: 64, toC: 74 }, { label: 'heavy', fromC: 95, toC: 104 }];
     const plan = [
       { receiver: 1, fromC: 53, toC: 57, compound: 'light' }, { receiver: 2, fromC: 57, toC: 68.8, compound: null }, { receiver: 3, fromC: 68.8, toC: 71, compound: 'mid' },
       { receiver: 4, fromC: 71, toC: 97, compound: null }, { receiver: 5, fromC: 97, toC: 102, compound: 'heavy' },
@@ -218,21 +221,13 @@ describe('RunWatcher with a cut plan', () => {
     // climb to the heavy one. The cut out of the window announced that rise: the creep's knee
     // just above it is the same rise, and its breakthrough named the heavy receiver at 81 degC.
     const points: [number, number][] = [[0, 20], [300, 20], [320, 56], [1200, 56.2], [1260, 66], [1280, 68.2], [1390, 70.6], [1450, 72.0], [1480, 78], [1540, 97], [1600, 99.5], [2400, 99.6]];
-    const at = (t: number): number => {
-      const k = points.findIndex(([pt]) => pt > t);
-      if (k <= 0) return points[k < 0 ? points.length - 1 : 0]![1];
-      const [t0, v0] = points[k - 1]!, [t1, v1] = points[k]!;
-      return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
-    };
-    const truthTimeS = Float64Array.from({ length: 2401 }, (_, i) => i);
-    const bands3: ExpectedPlateau[] = [{ label: 'light', fromC: 52, toC: 62 }, { label: 'mid', fromC: 64, toC: 74 }, { label: 'heavy', fromC: 95, toC: 104 }];
     const plan = [
       { receiver: 1, fromC: 53, toC: 57, compound: 'light' }, { receiver: 2, fromC: 57, toC: 68, compound: null }, { receiver: 3, fromC: 68, toC: 70, compound: 'mid' },
       { receiver: 4, fromC: 70, toC: 97, compound: null }, { receiver: 5, fromC: 97, toC: 102, compound: 'heavy' },
     ];
     let crossed = 0;
     for (let seed = 1; seed <= 10; seed++) {
-      const r = sensorReadings(truthTimeS, truthTimeS.map(at), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
+      const r = trace(points, seed);
       const found = alarms(analyzeReadings(r.timeS, r.headC, { plan, expectedPlateaus: bands3 }));
       // Either the crossing out of the window is the cut, and the heavy window's its own, or the
       // creep's knee holds the crossing and its breakthrough is the one alarm.
