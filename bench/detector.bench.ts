@@ -4,7 +4,9 @@
 // Also the watcher told where the charge's plateaus can lie ("with charge"), and with the planner's cut plan
 // for each run as well ("with plan").
 // Run: npx tsx bench/detector.bench.ts [runs] [seed] [--quick] [--verbose] [--only simulated|synthetic]
-//      [--options '{"flatSlopeCPerS": 0.01}']
+//      [--options '{"flatSlopeCPerS": 0.01}'] [--explain 'with plan']
+// --verbose lists the watcher's misses and false alarms run by run (false ones marked !!);
+// --explain does the same for the detector named.
 // The simulated corpus's truth is cached under .bench/ (first build takes a few minutes).
 import { performance } from 'node:perf_hooks';
 import { sensorReadings } from '../src/science/sensorModel/index.ts';
@@ -17,11 +19,13 @@ import { runPlanFor, simulatedTruthSource } from './simulatedTruth.ts';
 import type { RunPlan } from '../src/run/index.ts';
 
 const args = process.argv.slice(2);
-const positional = args.filter((a, i) => !a.startsWith('--') && args[i - 1] !== '--only' && args[i - 1] !== '--options');
+const valued = new Set(['--only', '--options', '--explain']);
+const positional = args.filter((a, i) => !a.startsWith('--') && !valued.has(args[i - 1] ?? ''));
 const quick = process.argv.includes('--quick');
 const count = Number(positional[0] ?? (quick ? 60 : 240));
 const seed = Number(positional[1] ?? 20251201);
-const verbose = process.argv.includes('--verbose');
+const explainIndex = args.indexOf('--explain');
+const explained = explainIndex >= 0 ? args[explainIndex + 1] : process.argv.includes('--verbose') ? 'run watcher' : undefined;
 const onlyIndex = args.indexOf('--only');
 const only = onlyIndex >= 0 ? args[onlyIndex + 1] : undefined;
 
@@ -79,10 +83,15 @@ for (const corpus of corpora) {
       const { alarms, plateaus, cutIns } = truthWindows(run.truth, medianInterval(run.timeS), run.isHand);
       const events = detector.run(run, corpus.name);
       const score = scoreRun(alarms, plateaus, events);
+      const withCutInsScore = scoreRun(alarms, plateaus, events, cutIns);
       all.push(score);
-      withCutIns.push(scoreRun(alarms, plateaus, events, cutIns));
+      withCutIns.push(withCutInsScore);
       if (fast(run)) fastScores.push(score);
-      if (verbose && detector.name === 'run watcher') explain(run, alarms, events, score);
+      // With the plan, as its false-alarm row reads: a cut into a next plateau is not false.
+      if (explained === detector.name) {
+        const told = detector.name === 'with plan' ? runPlanFor(run.spec) : detector.name === 'with charge' ? { expectedPlateaus: bandsFor(run, corpus.name) } : {};
+        explain(run, alarms, events, detector.name === 'with plan' ? withCutInsScore : score, told);
+      }
     }
     columns.push({ corpus: corpus.name, detector: detector.name, all: summariseScores(all, hours), fast: summariseScores(fastScores, fastHours), withCutIns: summariseScores(withCutIns, hours) });
   }
@@ -144,10 +153,22 @@ function medianInterval(timeS: Float64Array): number {
   return gaps[gaps.length >> 1] ?? NaN;
 }
 
-function explain(run: CorpusRun, alarms: ReturnType<typeof truthWindows>['alarms'], events: ScoredEvent[], score: RunScore): void {
+function explain(run: CorpusRun, alarms: ReturnType<typeof truthWindows>['alarms'], events: ScoredEvent[], score: RunScore, told: Partial<RunPlan>): void {
   const missed = Object.entries(score.truthCount).some(([k, v]) => score.hitCount[k as keyof typeof score.hitCount] < v);
   if (!missed && score.falseAlarmCount === 0) return;
   console.log(`-- ${run.id} ${run.spec.scenario} ${run.spec.components.map((c) => c.name).join('/')} ${run.label} plates ${run.spec.plates}: missed ${missed}, false ${score.falseAlarmCount}`);
+  const range = (fromC: number, toC: number): string => `${fromC.toFixed(1)}-${toC.toFixed(1)}`;
+  for (const b of told.expectedPlateaus ?? []) console.log(`   band ${b.label} ${range(b.fromC, b.toC)}${b.reachesPurity === false ? ' (never 90 % pure)' : ''}`);
+  for (const w of told.windows ?? []) console.log(`   window ${w.receiver} ${range(w.fromC, w.toC)} ${w.compound ?? 'intermediate'}`);
+  for (const p of run.truth.purityIntervals) console.log(`   truth ${p.component} 90 % pure ${p.startS.toFixed(0)}-${p.endS.toFixed(0)}`);
   for (const a of alarms) console.log(`   truth ${a.kind} at ${a.timeS.toFixed(0)} [${a.fromS.toFixed(0)}, ${a.toS.toFixed(0)}]`);
-  for (const e of events) console.log(`   event ${e.kind} at ${e.timeS.toFixed(1)} ${e.headC.toFixed(2)}${'reason' in e ? ` ${String(e.reason)}` : ''}`);
+  const falseTimesS = score.falseAlarmTimesS.slice();
+  for (const e of events) {
+    // The scorer's false alarms are the alarm events at those times (taken once each).
+    const k = falseTimesS.indexOf(e.timeS);
+    const isFalse = k >= 0 && e.kind !== 'plateau';
+    if (isFalse) falseTimesS.splice(k, 1);
+    const receiver = 'receiver' in e && e.receiver !== undefined ? ` receiver ${String(e.receiver)}` : '';
+    console.log(`   ${isFalse ? '!!' : '  '}event ${e.kind} at ${e.timeS.toFixed(1)} ${e.headC.toFixed(2)}${'reason' in e && e.reason !== undefined ? ` ${String(e.reason)}` : ''}${receiver}`);
+  }
 }
