@@ -10,7 +10,7 @@
 // The simulated corpus's truth is cached under .bench/ (first build takes a few minutes).
 import { performance } from 'node:perf_hooks';
 import { sensorReadings } from '../src/science/sensorModel/index.ts';
-import { analyzeReadings, type WatcherOptions } from '../src/signal/index.ts';
+import { analyzeReadings, type WatchContext, type WatcherOptions } from '../src/signal/index.ts';
 import { scoreRun, summariseScores, truthWindows, type RunScore, type ScoredEvent, type ScoreSummary } from '../src/signal/scoring/index.ts';
 import { syntheticTruth } from '../tests/support/syntheticTruth.ts';
 import { makeCorpus, syntheticTruthSource, type CorpusRun, type TruthSource } from './corpus.ts';
@@ -34,7 +34,8 @@ const optionsIndex = args.indexOf('--options');
 const overrides = optionsIndex >= 0 ? (JSON.parse(args[optionsIndex + 1] ?? '{}') as Partial<WatcherOptions>) : {};
 
 const SYNTHETIC = 'synthetic profiles';
-type Detector = { name: string; run: (r: CorpusRun, corpus: string) => ScoredEvent[] };
+// `told`: what a watcher column is told about the run (the peers are told nothing through it).
+type Detector = { name: string; told?: (r: CorpusRun, corpus: string) => WatchContext; run: (r: CorpusRun, corpus: string) => ScoredEvent[] };
 // 'with charge': the watcher told where the charge's plateaus can lie (the planner's expected
 // plateaus for the run's compounds at its pressure, as the fixed-alarm peer is told the boiling
 // points). 'with plan': that and the cut plan the app would make on Prepare for the run's charge
@@ -47,10 +48,13 @@ const bandsFor = (r: CorpusRun, corpus: string): RunPlan['expectedPlateaus'] => 
   const bands = runPlanFor(r.spec).expectedPlateaus;
   return corpus === SYNTHETIC ? bands?.map(({ label, fromC, toC }) => ({ label, fromC, toC })) : bands;
 };
+const watcher = (name: string, told: (r: CorpusRun, corpus: string) => WatchContext): Detector => ({
+  name, told, run: (r, corpus) => analyzeReadings(r.timeS, r.headC, told(r, corpus), overrides),
+});
 const detectors: Detector[] = [
-  { name: 'run watcher', run: (r) => analyzeReadings(r.timeS, r.headC, [], overrides) },
-  { name: 'with charge', run: (r, corpus) => analyzeReadings(r.timeS, r.headC, { expectedPlateaus: bandsFor(r, corpus) }, overrides) },
-  { name: 'with plan', run: (r, corpus) => analyzeReadings(r.timeS, r.headC, { plan: runPlanFor(r.spec).windows, expectedPlateaus: bandsFor(r, corpus) }, overrides) },
+  watcher('run watcher', () => ({})),
+  watcher('with charge', (r, corpus) => ({ expectedPlateaus: bandsFor(r, corpus) })),
+  watcher('with plan', (r, corpus) => ({ plan: runPlanFor(r.spec).windows, expectedPlateaus: bandsFor(r, corpus) })),
   { name: 'fixed bp+3', run: (r) => fixedAlarmPeer(r.timeS, r.headC, r.boilingPointsC) },
   { name: 'MA slope', run: (r) => slopePeer(r.timeS, r.headC) },
 ];
@@ -87,11 +91,9 @@ for (const corpus of corpora) {
       all.push(score);
       withCutIns.push(withCutInsScore);
       if (fast(run)) fastScores.push(score);
-      // With the plan, as its false-alarm row reads: a cut into a next plateau is not false.
-      if (explained === detector.name) {
-        const told = detector.name === 'with plan' ? runPlanFor(run.spec) : detector.name === 'with charge' ? { expectedPlateaus: bandsFor(run, corpus.name) } : {};
-        explain(run, alarms, events, detector.name === 'with plan' ? withCutInsScore : score, told);
-      }
+      // As the plan's false-alarm row reads it: a cut into a next plateau is not false (only a
+      // plan raises cuts, so the other columns score the same either way).
+      if (explained === detector.name) explain(run, alarms, events, withCutInsScore, detector.told?.(run, corpus.name) ?? {});
     }
     columns.push({ corpus: corpus.name, detector: detector.name, all: summariseScores(all, hours), fast: summariseScores(fastScores, fastHours), withCutIns: summariseScores(withCutIns, hours) });
   }
@@ -153,21 +155,18 @@ function medianInterval(timeS: Float64Array): number {
   return gaps[gaps.length >> 1] ?? NaN;
 }
 
-function explain(run: CorpusRun, alarms: ReturnType<typeof truthWindows>['alarms'], events: ScoredEvent[], score: RunScore, told: Partial<RunPlan>): void {
+function explain(run: CorpusRun, alarms: ReturnType<typeof truthWindows>['alarms'], events: ScoredEvent[], score: RunScore, told: WatchContext): void {
   const missed = Object.entries(score.truthCount).some(([k, v]) => score.hitCount[k as keyof typeof score.hitCount] < v);
   if (!missed && score.falseAlarmCount === 0) return;
   console.log(`-- ${run.id} ${run.spec.scenario} ${run.spec.components.map((c) => c.name).join('/')} ${run.label} plates ${run.spec.plates}: missed ${missed}, false ${score.falseAlarmCount}`);
   const range = (fromC: number, toC: number): string => `${fromC.toFixed(1)}-${toC.toFixed(1)}`;
   for (const b of told.expectedPlateaus ?? []) console.log(`   band ${b.label} ${range(b.fromC, b.toC)}${b.reachesPurity === false ? ' (never 90 % pure)' : ''}`);
-  for (const w of told.windows ?? []) console.log(`   window ${w.receiver} ${range(w.fromC, w.toC)} ${w.compound ?? 'intermediate'}`);
+  for (const w of told.plan ?? []) console.log(`   window ${w.receiver} ${range(w.fromC, w.toC)} ${w.compound ?? 'intermediate'}`);
   for (const p of run.truth.purityIntervals) console.log(`   truth ${p.component} 90 % pure ${p.startS.toFixed(0)}-${p.endS.toFixed(0)}`);
   for (const a of alarms) console.log(`   truth ${a.kind} at ${a.timeS.toFixed(0)} [${a.fromS.toFixed(0)}, ${a.toS.toFixed(0)}]`);
-  const falseTimesS = score.falseAlarmTimesS.slice();
+  const falseAlarms = new Set(score.falseAlarms);
   for (const e of events) {
-    // The scorer's false alarms are the alarm events at those times (taken once each).
-    const k = falseTimesS.indexOf(e.timeS);
-    const isFalse = k >= 0 && e.kind !== 'plateau';
-    if (isFalse) falseTimesS.splice(k, 1);
+    const isFalse = falseAlarms.has(e);
     const receiver = 'receiver' in e && e.receiver !== undefined ? ` receiver ${String(e.receiver)}` : '';
     console.log(`   ${isFalse ? '!!' : '  '}event ${e.kind} at ${e.timeS.toFixed(1)} ${e.headC.toFixed(2)}${'reason' in e && e.reason !== undefined ? ` ${String(e.reason)}` : ''}${receiver}`);
   }

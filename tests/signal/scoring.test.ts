@@ -64,7 +64,7 @@ describe('scoreRun', () => {
     // A second cut in the same window is a nuisance (false too).
     const twice = scoreRun(windows.alarms, windows.plateaus, [...events, { timeS: 515, kind: 'cut', headC: 71 }], windows.cutIns);
     expect([twice.falseAlarmCount, twice.nuisanceAlarmCount]).toEqual([1, 1]);
-    expect(twice.falseAlarmTimesS).toEqual([520]);
+    expect(twice.falseAlarms.map((e) => e.timeS)).toEqual([520]);
     // A vapour alarm there is no cut: it takes no cut-in window.
     const stray = scoreRun(windows.alarms, windows.plateaus, [...events, { timeS: 510, kind: 'vapour', headC: 70 }], windows.cutIns);
     expect(stray.falseAlarmCount).toBe(1);
@@ -87,7 +87,7 @@ describe('scoreRun', () => {
     ]);
     expect(s.hitCount.breakthrough).toBe(1);
     expect(s.falseAlarmCount).toBe(2);
-    expect(s.falseAlarmTimesS).toEqual([300, 470]);
+    expect(s.falseAlarms.map((e) => e.timeS)).toEqual([300, 470]);
     expect(s.nuisanceAlarmCount).toBe(1);
     expect(s.plateauHitCount).toBe(0);
   });

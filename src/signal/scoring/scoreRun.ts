@@ -20,8 +20,8 @@ export interface RunScore {
   /** Alarms matching no truth, and second alarms inside a window already hit. */
   falseAlarmCount: number;
   nuisanceAlarmCount: number;
-  /** When each of those false alarms came, in time order (for reading the misses one by one). Units: s. */
-  falseAlarmTimesS: number[];
+  /** Those false alarms themselves, in time order (for reading them one by one). */
+  falseAlarms: ScoredEvent[];
   /** Detection delay of each breakthrough hit. Units: s. */
   breakthroughLatencyS: number[];
   /** Planned cuts that took a cut-in window (given one): counted neither false nor in recall. */
@@ -42,7 +42,7 @@ export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly Pla
   const zero = (): Record<ScoredAlarmKind, number> => ({ vapour: 0, breakthrough: 0, stall: 0, 'sensor-fault': 0 });
   const score: RunScore = {
     truthCount: zero(), hitCount: zero(), plateauTruthCount: plateaus.length, plateauHitCount: 0,
-    falseAlarmCount: 0, nuisanceAlarmCount: 0, falseAlarmTimesS: [], breakthroughLatencyS: [], cutInHitCount: 0, cutInCount: cutIns.length,
+    falseAlarmCount: 0, nuisanceAlarmCount: 0, falseAlarms: [], breakthroughLatencyS: [], cutInHitCount: 0, cutInCount: cutIns.length,
   };
   const isCutInHit = cutIns.map(() => false);
   for (const w of windows) score.truthCount[w.kind]++;
@@ -76,7 +76,7 @@ export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly Pla
       if (w.kind === 'breakthrough') score.breakthroughLatencyS.push(alarm.timeS - w.timeS);
     } else {
       score.falseAlarmCount++;
-      score.falseAlarmTimesS.push(alarm.timeS);
+      score.falseAlarms.push(alarm);
       if (isInsideHit) score.nuisanceAlarmCount++;
     }
   }
