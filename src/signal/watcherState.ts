@@ -63,8 +63,13 @@ export interface WatcherState {
    * that main cut while no plateau was declared). NaN: none. Absent in older saves. Units: degC, s. */
   leftMainCutC?: number;
   leftMainCutS?: number;
-  /** The current plateau is a shoulder of the climb out of that one: it raises no breakthrough. */
+  /** The current plateau is a shoulder of the climb out of that one: it raises no breakthrough
+   * unless the head sagged on it. */
   isShoulder: boolean;
+  /** Since when the head has been below the shoulder's level by a sag's depth (NaN: it is not),
+   * and whether it has sagged there: its next rise is a cut of its own. Absent in older saves. Units: s. */
+  shoulderSagSinceS?: number;
+  hasShoulderSag?: boolean;
   hasRaisedNoVapour: boolean;
   hasRaisedCreep: boolean;
   /** Since when the head has climbed slowly without settling. Units: s. */
@@ -113,7 +118,7 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     spikes: createSpikeFilter(), fast: createEwRegression(4), slow: createEwRegression(30), slowJumpCPerS: NaN,
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN, riseSinceS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
-    residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false,
+    residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false, shoulderSagSinceS: NaN, hasShoulderSag: false,
     hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), typedPrevC: NaN, typedPairC: NaN, kneeSinceS: NaN, kneeEndS: NaN, kneeSumC: 0, kneeCount: 0, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
   };
 }

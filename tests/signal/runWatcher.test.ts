@@ -267,6 +267,19 @@ describe('RunWatcher on shapes the column simulator makes', () => {
     expect(events[2]!.timeS).toBeLessThan(1560);
   });
 
+  it('a shoulder the head sags on before it climbs again is a cut of its own: its rise alarms again', () => {
+    // An early alarm 2 degC into a plateau's creep, the head settling on a shoulder, then the
+    // pre-cut sag of a degree and the climb to the next component: the climb is that cut.
+    const { timeS, headC } = profile([
+      [0, 20], [300, 20], [310, 40], [1200, 40.2], [1260, 42], [1500, 42.2], [1530, 41.2], [1560, 41.2], [1620, 44], [1800, 50], [1900, 56], [2800, 56.2],
+    ]);
+    const events = analyzeReadings(timeS, headC);
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough', 'plateau', 'breakthrough', 'plateau']);
+    // The head passes the shoulder's level (about 42.2 degC) + 1 degC at about 1595 s.
+    expect(events[4]!.timeS).toBeGreaterThan(1590);
+    expect(events[4]!.timeS).toBeLessThan(1640);
+  });
+
   it('a 3-minute pause 5 degC above the last cut is part of the climb: no second breakthrough', () => {
     const { timeS, headC } = profile([[0, 20], [300, 20], [310, 80], [1500, 80.2], [1560, 85], [1740, 85.1], [1860, 100], [2800, 100]]);
     const events = analyzeReadings(timeS, headC);
