@@ -1,6 +1,6 @@
 import { isAlarmKind, wordWatchEvent } from './eventWording.ts';
 import { normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
-import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope } from './ewRegression.ts';
+import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
 import { onAcceptedReading, restartSlowFit } from './stateMachine.ts';
 import { spikeFilterPush, spikeFilterReset } from './spikeFilter.ts';
 import { createStuckReadings, pushStuckReading } from './stuckReading.ts';
@@ -184,6 +184,7 @@ export class RunWatcher {
     const interval = Number.isNaN(s.intervalS) ? 1 : s.intervalS;
     s.fast.tauS = Math.max(4, 1.5 * interval);
     s.slow.tauS = Math.max(30, 4 * interval);
+    let isTypedJump = false;
     if (s.fast.w > 0) {
       const predicted = ewRegressionLevel(s.fast) + ewRegressionSlope(s.fast) * dtS;
       const e2 = (valueC - predicted) ** 2;
@@ -191,8 +192,16 @@ export class RunWatcher {
       if (e2 < INNOVATION_CLIP_C * INNOVATION_CLIP_C) {
         s.innovationVarC2 = Number.isNaN(s.innovationVarC2) ? e2 : s.innovationVarC2 + 0.02 * (e2 - s.innovationVarC2);
       }
+      isTypedJump = interval >= s.options.handIntervalS && e2 > SLOW_RESTART_C * SLOW_RESTART_C;
     }
-    ewRegressionAdd(s.fast, timeS, valueC);
+    // Typed readings: the fast fit spans 1.5 intervals, minutes, so after a jump (the vapour's
+    // arrival, a cut) the readings before it would hold the fit degrees under the head for several
+    // readings, and the first innovations under the clip, fixed for an hour at that gain, would be
+    // that lag, not the reading noise (a room reading of 23 degC gave 1.8 degC, and the plateau
+    // it found then never alarmed on a climb to 52). The fit starts again at the jump, as the slow
+    // one does.
+    if (isTypedJump) restartEwRegression(s.fast, timeS, valueC);
+    else ewRegressionAdd(s.fast, timeS, valueC);
     // After a clear change of course the old readings only bias the slope that says "steady".
     if (s.slow.w > 0 && Math.abs(valueC - ewRegressionLevel(s.slow)) > SLOW_RESTART_C) restartSlowFit(s, timeS, valueC, dtS);
     else ewRegressionAdd(s.slow, timeS, valueC);

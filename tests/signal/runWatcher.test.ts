@@ -122,6 +122,20 @@ describe('RunWatcher', () => {
     expect(events[2]!.timeS).toBe(timeS[9]);
   });
 
+  it('typed readings creeping off a first plateau alarm at the reading 5 degC up, not once the climb reaches 60 degC: the room reading is no noise', () => {
+    // The shape of a simulated few-plate run read by hand every 60-105 s in 0.5 degC steps: a
+    // room reading, the vapour, a head creeping 0.5-1 degC a reading, then the climb. The fast
+    // fit spans minutes at this pace; kept across the vapour's jump, it lagged the head by
+    // degrees, its prediction errors were taken for 1.8 degC of reading noise, and the
+    // breakthrough waited for the reading of 60 degC.
+    const points: [number, number][] = [
+      [26, 23], [125, 39.5], [230, 40], [331, 40], [392, 40.5], [464, 41], [525, 41.5], [588, 42.5], [689, 46.5], [761, 52.5], [826, 60], [928, 69], [1020, 74], [1110, 76.5], [1200, 77], [1300, 77],
+    ];
+    const events = analyzeReadings(Float64Array.from(points, (p) => p[0]), Float64Array.from(points, (p) => p[1]));
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough']);
+    expect(events[2]!.timeS).toBe(689);
+  });
+
   describe('a cut two typed readings long', () => {
     // Invented typed runs, a reading every 90-101 s.
     const typed = (readings: number[]): WatchEvent[] =>
