@@ -197,9 +197,9 @@ export class RunWatcher {
     // Typed readings: the fast fit spans 1.5 intervals, minutes, so after a jump (the vapour's
     // arrival, a cut) the readings before it would hold the fit degrees under the head for several
     // readings, and the first innovations under the clip, fixed for an hour at that gain, would be
-    // that lag, not the reading noise (a room reading of 23 degC gave 1.8 degC, and the plateau
-    // it found then never alarmed on a climb to 52). The fit starts again at the jump, as the slow
-    // one does.
+    // that lag, not the reading noise (a room reading of 23 degC gave 1.8 degC, and the creep
+    // off the plateau it found then alarmed only once the climb reached 60). The fit starts
+    // again at the jump, as the slow one does.
     if (isTypedJump) restartEwRegression(s.fast, timeS, valueC);
     else ewRegressionAdd(s.fast, timeS, valueC);
     // After a clear change of course the old readings only bias the slope that says "steady".
