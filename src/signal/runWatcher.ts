@@ -99,7 +99,7 @@ export class RunWatcher {
       // Still rising five minutes after the vapour came (a first plateau never declared) is a
       // climb like one off a plateau: a value frozen on it is judged against the climb.
       const stuckState = s.state === 'rising' && timeS - s.vapourTimeS >= ARRIVAL_S ? 'leaving' : s.state;
-      if (pushStuckReading(s.stuck, timeS, headC, stuckState, s.resolutionC ?? Number.NaN, climbCPerS)) {
+      if (pushStuckReading(s.stuck, timeS, headC, stuckState, s.resolutionC ?? Number.NaN, climbCPerS, s.intervalS)) {
         this.enterFault(timeS, 'stuck', headC);
         return this.events;
       }

@@ -6,8 +6,15 @@
  * any level, two readings fall in one quantisation step q at most with probability
  * p = erf(q / (2 sqrt(2) sigma)) (the step centred on the level), so n identical readings in a
  * row have probability at most p^(n-1). The run that is a fault is the n with p^(n-1) below
- * `odds`. Quantised to steps as wide as the noise (whole degrees, a quiet 0.25 degC board),
- * p nears 1 and the test asks for hours: it cannot mistake such a plateau for a fault.
+ * the odds that keep this test to one false alarm in about a thousand hours: runs of one value
+ * start at most once a reading, and readings under a second apart count as one (below).
+ * Sigma comes from the steps between readings less the rounding's own share, q^2 / 12
+ * (Sheppard's correction). Under half a step of noise the readings cannot show it: where the
+ * head sits near the middle of a step they hold one value as long as it stays there, and as the
+ * head creeps across a step they flicker and the steps overstate the noise. On such a quiet
+ * board a plateau's stillness is a fault only after ten minutes as well. Quantised to steps far
+ * wider than the noise (whole degrees, a board of 0.05 degC noise in 0.25 degC steps), p nears 1
+ * and the test asks for hours.
  * While the head climbs off a plateau, the test is the climb itself: a head rising at r degC/s
  * steps a reading of resolution q on every q / r seconds, so the same value for as long as eight
  * such steps (and at least 10 readings and 30 s) is frozen, whatever the noise.
@@ -39,8 +46,15 @@ export interface StuckReadings {
   runSigmaC?: number;
 }
 
-/** A run this unlikely from noise is a fault (about one false alarm in 10^9 runs). */
-const ODDS = 1e-9;
+/** False stuck alarms an hour that the run length allows, on a plateau of white noise: a
+ * fiftieth of the issue's 0.05 for all alarms. */
+const FALSE_PER_HOUR = 1e-3;
+/** Readings closer than this are not independent (boards average over a second or so). Units: s. */
+const INDEPENDENT_S = 1;
+/** Noise under this share of the resolution is a quiet board: the readings cannot show it. */
+const QUIET_SHARE = 0.5;
+/** On a quiet board, a plateau's stillness must last this long as well. Units: s. */
+const QUIET_MIN_S = 600;
 /** The value must have changed this often in the stretch before its stillness means anything. */
 const MIN_CHANGES = 20;
 /** Never fewer identical readings, nor a shorter time, than these. */
@@ -65,8 +79,22 @@ function erf(x: number): number {
   return x >= 0 ? y : -y;
 }
 
-/** Identical readings in a row that noise of `sigmaC` at resolution `quantumC` all but never gives. */
-export function stuckRunLength(sigmaC: number, quantumC: number, odds = ODDS): number {
+/** The chance a run of one value may have of being noise, for readings `intervalS` apart: runs
+ * start at most once a reading (once a second for faster ones), so FALSE_PER_HOUR over the
+ * runs started in an hour. */
+export function stuckOdds(intervalS: number): number {
+  return (FALSE_PER_HOUR * Math.max(INDEPENDENT_S, Number.isFinite(intervalS) ? intervalS : INDEPENDENT_S)) / 3600;
+}
+
+/** The noise of readings in steps of `quantumC` whose steps between readings show `stepSigmaC`:
+ * less the rounding's own variance q^2 / 12 (Sheppard's correction). Units: degC. */
+export function noiseLessRounding(stepSigmaC: number, quantumC: number): number {
+  return quantumC > 0 ? Math.sqrt(Math.max(0, stepSigmaC * stepSigmaC - (quantumC * quantumC) / 12)) : stepSigmaC;
+}
+
+/** Identical readings in a row that noise of `sigmaC` at resolution `quantumC` all but never
+ * gives: p^(n-1) below `odds` (by default those for a reading a second). */
+export function stuckRunLength(sigmaC: number, quantumC: number, odds = stuckOdds(INDEPENDENT_S)): number {
   if (!(sigmaC > 0) || !(quantumC > 0)) return Number.POSITIVE_INFINITY;
   const p = erf(quantumC / (2 * Math.SQRT2 * sigmaC));
   if (!(p < 1)) return Number.POSITIVE_INFINITY;
@@ -75,8 +103,8 @@ export function stuckRunLength(sigmaC: number, quantumC: number, odds = ODDS): n
 
 /**
  * One valid reading, in watcher state `state`, with the readings' resolution (`quantumC`, the
- * smallest change the watcher has seen between two) and the head's climb rate as the watcher last
- * saw it (`climbCPerS`). On a plateau the run is judged against the noise, measured on the
+ * smallest change the watcher has seen between two), the head's climb rate as the watcher last
+ * saw it (`climbCPerS`) and the usual time between readings (`intervalS`). On a plateau the run is judged against the noise, measured on the
  * plateau itself (a climb's steps and its rounding look like noise and would make a quiet
  * plateau look frozen), where a frozen reading would hide the breakthrough; while leaving a
  * plateau, against the climb the value came in. Returns true once the run is a fault. Readings
@@ -84,7 +112,7 @@ export function stuckRunLength(sigmaC: number, quantumC: number, odds = ODDS): n
  * correlated over a second or so): on a plateau the run must also last a second for each
  * reading the test asks for.
  */
-export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string, quantumC: number, climbCPerS = Number.NaN): boolean {
+export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string, quantumC: number, climbCPerS = Number.NaN, intervalS = Number.NaN): boolean {
   if (state !== t.state) {
     t.state = state;
     t.changes = 0;
@@ -123,8 +151,10 @@ export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number
   // On the plateau that has shown its noise, by that noise; elsewhere (a board hung as the
   // breakthrough began, which the watcher then follows out of the plateau and onto the frozen
   // value as if it were the next one), by the noise of the plateau the run began on.
-  const sigmaC = state === 'plateau' && t.changes >= MIN_CHANGES ? t.sigmaC : (t.runSigmaC ?? Number.NaN);
-  if (!Number.isFinite(sigmaC)) return false;
-  const needed = stuckRunLength(sigmaC, quantumC);
-  return t.count >= needed && stillS >= Math.max(MIN_SECONDS, needed - 1);
+  const stepSigmaC = state === 'plateau' && t.changes >= MIN_CHANGES ? t.sigmaC : (t.runSigmaC ?? Number.NaN);
+  if (!Number.isFinite(stepSigmaC)) return false;
+  const sigmaC = noiseLessRounding(stepSigmaC, quantumC);
+  const needed = stuckRunLength(sigmaC, quantumC, stuckOdds(intervalS));
+  const isQuiet = sigmaC < QUIET_SHARE * quantumC;
+  return t.count >= needed && stillS >= Math.max(isQuiet ? QUIET_MIN_S : MIN_SECONDS, needed - 1);
 }

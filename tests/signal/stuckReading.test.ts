@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { createRandom } from '../../src/science/sensorModel/index.ts';
 import { RunWatcher, type WatchEvent } from '../../src/signal/index.ts';
-import { stuckRunLength } from '../../src/signal/stuckReading.ts';
+import { createDemoStill } from '../../src/science/demo/index.ts';
+import { noiseLessRounding, stuckOdds, stuckRunLength } from '../../src/signal/stuckReading.ts';
 
 // Shaped demo traces, not data: 20 degC at the bulb, vapour at 300 s, a plateau at 77 degC.
 function headAt(t: number): number {
@@ -40,12 +41,79 @@ describe('a reading stuck where it must move', () => {
   it('stuckRunLength follows the noise and the resolution: short for a noisy fine sensor, hours for a coarse quiet one', () => {
     // sigma 0.1 degC at 0.01 degC resolution: p = erf(0.01 / (2 sqrt2 x 0.1)) = 0.040, so the floor of 10 readings rules
     expect(stuckRunLength(0.1, 0.01)).toBe(10);
-    // sigma 0.05 degC at 0.25 degC steps: p = erf(1.77) = 0.988, over 1500 identical readings
-    expect(stuckRunLength(0.05, 0.25)).toBeGreaterThan(1500);
+    // sigma 0.05 degC at 0.25 degC steps: p = erf(1.77) = 0.988, over 1200 identical readings
+    expect(stuckRunLength(0.05, 0.25)).toBeGreaterThan(1200);
     // whole degrees with sigma 0.2 degC: p = erf(1.77) again
-    expect(stuckRunLength(0.2, 1)).toBeGreaterThan(1500);
+    expect(stuckRunLength(0.2, 1)).toBeGreaterThan(1200);
     expect(stuckRunLength(Number.NaN, 0.01)).toBe(Number.POSITIVE_INFINITY);
     expect(stuckRunLength(0.1, 0)).toBe(Number.POSITIVE_INFINITY);
+  });
+
+  it('the odds are a false-alarm rate: one in a thousand hours, over the runs of one value an hour can start', () => {
+    // Runs start at most once a reading, and readings under a second apart count as one.
+    expect(stuckOdds(1)).toBeCloseTo(1e-3 / 3600, 12);
+    expect(stuckOdds(0.1)).toBeCloseTo(1e-3 / 3600, 12);
+    expect(stuckOdds(5)).toBeCloseTo((5 * 1e-3) / 3600, 12);
+    // A loud board read every 5 s: sigma 0.4 degC at 0.25 degC steps, p = erf(0.221) = 0.245,
+    // and 0.245^10 = 7.8e-7 is under 1.4e-6: 11 readings, 50 s.
+    expect(stuckRunLength(0.4, 0.25, stuckOdds(5))).toBe(11);
+  });
+
+  it('the noise is the steps between readings less the rounding: q^2 / 12 off the variance', () => {
+    // The variance of a rounding error spread evenly over a step q is q^2 / 12 (Sheppard's
+    // correction, W. F. Sheppard 1898, from memory).
+    expect(noiseLessRounding(0.5, 0.25)).toBeCloseTo(Math.sqrt(0.25 - 0.0625 / 12), 12);
+    // A board flickering evenly between two steps shows steps of q half the time, a step sigma
+    // of q / 2 whatever its noise: q sqrt(1/4 - 1/12) = 0.41 q, under the half step that marks
+    // a quiet board.
+    expect(noiseLessRounding(0.125, 0.25)).toBeCloseTo(0.25 * Math.sqrt(1 / 4 - 1 / 12), 12);
+    expect(noiseLessRounding(0.125, 0.25)).toBeLessThan(0.125);
+    expect(noiseLessRounding(0.01, 0.25)).toBe(0);
+    expect(noiseLessRounding(0.2, 0)).toBe(0.2);
+  });
+
+  it('a loud board read every 5 s that freezes on the plateau is a fault within a minute', () => {
+    // 0.4 degC sd in 0.25 degC steps: at odds of 10^-9 a run it took 16 readings (75 s); at one
+    // false alarm in a thousand hours, 11 (50 s).
+    const { t, c } = trace(1500, 5, 0.4, 0.25, 1200);
+    const stuck = stuckFaults(run(new RunWatcher(), t, c));
+    expect(stuck).toHaveLength(1);
+    expect(stuck[0]!.timeS).toBeGreaterThan(1200);
+    expect(stuck[0]!.timeS).toBeLessThanOrEqual(1260);
+  });
+
+  it('a quiet 0.25 degC board on a plateau that creeps across its steps is never taken for a stuck sensor', () => {
+    // Shaped demo: the plateau creeps 0.75 degC in an hour. Where the head crosses a step's edge
+    // the readings flicker and the steps look like noise of 0.1 degC or more; where it sits
+    // mid-step they hold one value for minutes.
+    for (const intervalS of [1, 2, 5]) {
+      for (const seed of [1, 2, 3, 4, 5, 6]) {
+        const random = createRandom(seed);
+        const t: number[] = [], c: number[] = [];
+        for (let time = 0; time <= 4000; time += intervalS) {
+          const head = time < 400 ? headAt(time) : 77 + (0.75 * (time - 400)) / 3600;
+          t.push(time);
+          c.push(Math.round((head + 0.05 * random.normal()) / 0.25) * 0.25);
+        }
+        expect(stuckFaults(run(new RunWatcher(), t, c)), `every ${intervalS} s, seed ${seed}`).toEqual([]);
+      }
+    }
+  });
+
+  it("the app's demo still, read every 1, 2 or 5 s, raises no stuck sensor over its whole run", () => {
+    // Its board: 0.05 degC noise in 0.25 degC steps; the noise seeds are those that raised a
+    // stuck alarm before the quiet board's ten minutes.
+    for (const intervalS of [1, 2, 5]) {
+      for (const seed of [2, 5, 6]) {
+        const still = createDemoStill({ seed });
+        const t: number[] = [], c: number[] = [];
+        for (let state = still.state; state.phase !== 'dry' && state.timeS < 4 * 3600; state = still.step(intervalS)) {
+          t.push(state.timeS);
+          c.push(state.headC);
+        }
+        expect(stuckFaults(run(new RunWatcher(), t, c)), `every ${intervalS} s, seed ${seed}`).toEqual([]);
+      }
+    }
   });
 
   it('a meter that freezes on the plateau raises one sensor fault within a minute, and trusts the sensor again when it moves', () => {
