@@ -315,7 +315,8 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   s.typedPrevC = valueC;
   // A reading below the pair that pairs with nothing is a pre-cut sag: the pair still stands
   // for the rise after it (a component read twice, one reading a degree low, then the climb).
-  s.typedPairC = Math.abs(valueC - previousC) <= TYPED_PAIR_C ? (valueC + previousC) / 2 : valueC < pairC ? pairC : NaN;
+  // A reading back at the pair's level after such a sag (65, 65.5, 64.5, 65.5) keeps it too.
+  s.typedPairC = Math.abs(valueC - previousC) <= TYPED_PAIR_C ? (valueC + previousC) / 2 : valueC - pairC <= TYPED_PAIR_C ? pairC : NaN;
   // One reading step more than the deadband: a typed reading a step up may be rounding only.
   const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
   if (!(valueC >= pairC + s.options.breakthroughMinRiseC + stepC)) return false;

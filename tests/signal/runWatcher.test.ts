@@ -150,6 +150,11 @@ describe('RunWatcher', () => {
       expect(kinds(events).slice(0, 2)).toEqual(['vapour', 'breakthrough']);
       expect(events[1]!.headC).toBe(91.5);
     });
+    it('a pair, a reading a degree low, one back at the pair, then the jump is still that cut\'s breakthrough', () => {
+      const events = typed([19.5, 19.5, 55.0, 55.5, 54.5, 55.5, 91.5, 99.5, 99.0, 99.5, 99.0]);
+      expect(kinds(events).slice(0, 2)).toEqual(['vapour', 'breakthrough']);
+      expect(events[1]!.headC).toBe(91.5);
+    });
     it('a climb of a degree or two a reading, in whole degrees, has no pair: no breakthrough', () => {
       expect(kinds(typed([21, 21, 60, 62, 64, 66, 68, 69, 71, 72, 74, 75, 77]))).toEqual(['vapour']);
     });
