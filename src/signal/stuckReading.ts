@@ -104,10 +104,10 @@ export function stuckRunLength(sigmaC: number, quantumC: number, odds = stuckOdd
 /**
  * One valid reading, in watcher state `state`, with the readings' resolution (`quantumC`, the
  * smallest change the watcher has seen between two), the head's climb rate as the watcher last
- * saw it (`climbCPerS`) and the usual time between readings (`intervalS`). On a plateau the run is judged against the noise, measured on the
- * plateau itself (a climb's steps and its rounding look like noise and would make a quiet
- * plateau look frozen), where a frozen reading would hide the breakthrough; while leaving a
- * plateau, against the climb the value came in. Returns true once the run is a fault. Readings
+ * saw it (`climbCPerS`) and the usual time between readings (`intervalS`). On a plateau the run
+ * is judged against the noise, measured on the plateau itself (a climb's steps and its rounding
+ * look like noise and would make a quiet plateau look frozen), where a frozen reading would hide
+ * the breakthrough; while leaving a plateau, against the climb the value came in. Returns true once the run is a fault. Readings
  * closer than a second are not counted as independent (boards average, so their noise is
  * correlated over a second or so): on a plateau the run must also last a second for each
  * reading the test asks for.
