@@ -107,10 +107,10 @@ export function stuckRunLength(sigmaC: number, quantumC: number, odds = stuckOdd
  * saw it (`climbCPerS`) and the usual time between readings (`intervalS`). On a plateau the run
  * is judged against the noise, measured on the plateau itself (a climb's steps and its rounding
  * look like noise and would make a quiet plateau look frozen), where a frozen reading would hide
- * the breakthrough; while leaving a plateau, against the climb the value came in. Returns true once the run is a fault. Readings
- * closer than a second are not counted as independent (boards average, so their noise is
- * correlated over a second or so): on a plateau the run must also last a second for each
- * reading the test asks for.
+ * the breakthrough; while leaving a plateau, against the climb the value came in. Returns true
+ * once the run is a fault. Readings closer than a second are not counted as independent (boards
+ * average, so their noise is correlated over a second or so): on a plateau the run must also last
+ * a second for each reading the test asks for.
  */
 export function pushStuckReading(t: StuckReadings, timeS: number, valueC: number, state: string, quantumC: number, climbCPerS = Number.NaN, intervalS = Number.NaN): boolean {
   if (state !== t.state) {
