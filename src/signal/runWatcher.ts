@@ -1,6 +1,6 @@
 import { isAlarmKind, wordWatchEvent } from './eventWording.ts';
 import { normaliseCutPlan, normaliseExpectedPlateaus } from './cutPlan.ts';
-import { ewRegressionAdd, ewRegressionLevel, ewRegressionSlope, restartEwRegression } from './ewRegression.ts';
+import { ewRegressionAdd, ewRegressionLevel, ewRegressionPredictionVariance, ewRegressionSlope, ewSteadyPredictionVariance, restartEwRegression } from './ewRegression.ts';
 import { onAcceptedReading, restartSlowFit } from './stateMachine.ts';
 import { spikeFilterPush, spikeFilterReset } from './spikeFilter.ts';
 import { createStuckReadings, pushStuckReading } from './stuckReading.ts';
@@ -190,7 +190,14 @@ export class RunWatcher {
       const e2 = (valueC - predicted) ** 2;
       // Only the reading noise: jumps (vapour, breakthroughs) would swamp it for hours.
       if (e2 < INNOVATION_CLIP_C * INNOVATION_CLIP_C) {
-        s.innovationVarC2 = Number.isNaN(s.innovationVarC2) ? e2 : s.innovationVarC2 + 0.02 * (e2 - s.innovationVarC2);
+        // On the scale of a fit in full stride: a young fit (the first readings, or typed ones
+        // just after a jump restarted it) extrapolates from few readings and misses by more
+        // (the innovation covariance of a Kalman filter, which holds its state's uncertainty).
+        // Taken as they come, the first typed readings after the vapour, whole degrees, set the
+        // noise at 2 degC for an hour, and the plateau's rise alarmed only 17 degC up.
+        const young = (1 + ewRegressionPredictionVariance(s.fast, dtS)) / (1 + ewSteadyPredictionVariance(s.fast.tauS, interval));
+        const scaled = e2 / young;
+        s.innovationVarC2 = Number.isNaN(s.innovationVarC2) ? scaled : s.innovationVarC2 + 0.02 * (scaled - s.innovationVarC2);
       }
       isTypedJump = interval >= s.options.handIntervalS && e2 > SLOW_RESTART_C * SLOW_RESTART_C;
     }

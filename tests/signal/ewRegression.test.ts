@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewLevelNoisePerSd, ewRegressionSlope, ewSlopeNoisePerSd, restartEwRegression } from '../../src/signal/ewRegression.ts';
+import {
+  createEwRegression, ewRegressionAdd, ewRegressionEffectiveReadings, ewRegressionLevel, ewLevelNoisePerSd, ewRegressionPredictionVariance, ewRegressionSlope, ewSlopeNoisePerSd,
+  ewSteadyPredictionVariance, restartEwRegression,
+} from '../../src/signal/ewRegression.ts';
 import { createRandom } from '../../src/science/sensorModel/index.ts';
 
 describe('ewRegression', () => {
@@ -65,5 +68,54 @@ describe('ewRegression', () => {
     // weights 2 - u from the inverse moment matrix).
     expect(ewSlopeNoisePerSd(60, 0.1) / (0.5 * Math.sqrt(0.1 / 60 ** 3))).toBeCloseTo(1, 2);
     expect(ewLevelNoisePerSd(60, 0.1) / Math.sqrt((1.25 * 0.1) / 60)).toBeCloseTo(1, 2);
+  });
+  it('ewRegressionPredictionVariance: a young fit and a long one miss the next reading of white noise by that much', () => {
+    // Simulation of weighted least squares' prediction variance: 40,000 fits of unit-variance
+    // readings at irregular times (typed readings 84-120 s apart, tau 1.5 intervals), each
+    // predicting the next one; the mean squared miss against 1 + the variance, within 3 %.
+    const times = [0, 84, 190, 310, 395, 500, 620, 704, 810, 930];
+    for (const count of [1, 2, 3, 9]) {
+      const random = createRandom(11 + count);
+      const aheadS = times[count]! - times[count - 1]!;
+      let miss2 = 0, expected = 0;
+      for (let k = 0; k < 40_000; k++) {
+        const r = createEwRegression(150);
+        for (let i = 0; i < count; i++) ewRegressionAdd(r, times[i]!, random.normal());
+        expected = 1 + ewRegressionPredictionVariance(r, aheadS);
+        const predicted = ewRegressionLevel(r) + ewRegressionSlope(r) * aheadS;
+        miss2 += (random.normal() - predicted) ** 2;
+      }
+      expect(miss2 / 40_000 / expected).toBeGreaterThan(0.97);
+      expect(miss2 / 40_000 / expected).toBeLessThan(1.03);
+    }
+    // Two readings: the line through them, extrapolated one interval on, has variance
+    // 2^2 + 1 = 5 whatever the weights (y = 2 y2 - y1, worked by hand); the next reading adds 1.
+    const two = createEwRegression(150);
+    ewRegressionAdd(two, 0, 0);
+    ewRegressionAdd(two, 100, 0);
+    expect(ewRegressionPredictionVariance(two, 100)).toBeCloseTo(5, 9);
+    // One reading predicts itself: variance 1.
+    const one = createEwRegression(150);
+    ewRegressionAdd(one, 0, 0);
+    expect(ewRegressionPredictionVariance(one, 100)).toBe(1);
+  });
+  it('ewSteadyPredictionVariance is what a fit in full stride gives, and restartEwRegression starts it afresh', () => {
+    for (const [tauS, intervalS] of [[4, 1], [7.5, 5], [150, 100], [30, 0.1]] as const) {
+      const r = createEwRegression(tauS);
+      for (let i = 0; i < 20_000 && i * intervalS < 200 * tauS; i++) ewRegressionAdd(r, i * intervalS, 0);
+      expect(ewRegressionPredictionVariance(r, intervalS) / ewSteadyPredictionVariance(tauS, intervalS)).toBeCloseTo(1, 6);
+      restartEwRegression(r, 1e6, 0);
+      expect(ewRegressionPredictionVariance(r, intervalS)).toBe(1);
+    }
+  });
+  it('a fit saved before the squared weights were kept still predicts, its variance overstated until old readings decay', () => {
+    const r = createEwRegression(10);
+    for (let t = 0; t < 100; t++) ewRegressionAdd(r, t, 20);
+    const saved = { ...r, w2: undefined, t2: undefined, tt2: undefined };
+    ewRegressionAdd(saved, 100, 20);
+    ewRegressionAdd(r, 100, 20);
+    expect(ewRegressionPredictionVariance(saved, 1)).toBeGreaterThan(ewRegressionPredictionVariance(r, 1));
+    for (let t = 101; t < 400; t++) { ewRegressionAdd(saved, t, 20); ewRegressionAdd(r, t, 20); }
+    expect(ewRegressionPredictionVariance(saved, 1) / ewRegressionPredictionVariance(r, 1)).toBeCloseTo(1, 6);
   });
 });

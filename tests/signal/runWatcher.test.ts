@@ -136,6 +136,19 @@ describe('RunWatcher', () => {
     expect(events[2]!.timeS).toBe(689);
   });
 
+  it('typed whole-degree readings: the misses of a fit just restarted by the vapour are no reading noise, and the rise alarms 7 degC up, not 17', () => {
+    // Invented typed run, a reading every 60-120 s: the first one after the vapour reads two
+    // degrees under the head, and the line the restarted fit draws through it and the next one
+    // misses the third by 2 degC. Taken as reading noise (2 degC, kept for an hour at the
+    // innovation's gain) it held the CUSUM back until the reading of 68.
+    const points: [number, number][] = [
+      [40, 21], [150, 49], [235, 51], [318, 51], [380, 51], [475, 51], [556, 50], [675, 53], [741, 54], [810, 58], [912, 68], [990, 71], [1050, 72],
+    ];
+    const events = analyzeReadings(Float64Array.from(points, (p) => p[0]), Float64Array.from(points, (p) => p[1]));
+    expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough']);
+    expect(events[2]!.timeS).toBe(810);
+  });
+
   describe('a cut two typed readings long', () => {
     // Invented typed runs, a reading every 90-101 s.
     const typed = (readings: number[]): WatchEvent[] =>
