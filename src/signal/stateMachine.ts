@@ -157,6 +157,12 @@ const KNEE_AFTER_VAPOUR_S = 180;
  * Units: degC. */
 const TYPED_PAIR_C = 0.5;
 const TYPED_STEP_MAX_C = 1;
+/** Typed readings leaving a component's band of the charge (watchTypedBandExit): a jump of at
+ * least this much, and this many times the climb between the two readings before it, in the band.
+ * Chosen on the benchmark: a climb through a wide band's mixed top (dichloromethane's with a tenth
+ * of toluene spans 25 degC) leaves it by a few degrees a reading, a component's cut by tens. */
+const TYPED_EXIT_JUMP_C = 10;
+const TYPED_EXIT_RATIO = 3;
 
 /** One reading that passed the spike filter; the filters have already taken it. */
 export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
@@ -249,6 +255,7 @@ function watchForVapour(s: WatcherState, timeS: number, valueC: number, dtS: num
     s.plateauCandidateS = NaN;
     s.fallSinceS = NaN;
     s.typedPrevC = valueC;
+    s.typedBeforeC = NaN;
     s.typedPairC = NaN;
     sink.setState('rising', timeS);
     // Room-temperature readings would hold the slope up long after the head has settled.
@@ -307,12 +314,19 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
 function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: EventSink): boolean {
   if (!(s.intervalS >= s.options.handIntervalS)) {
     s.typedPrevC = NaN;
+    s.typedBeforeC = NaN;
     s.typedPairC = NaN;
     return false;
   }
   const previousC = s.typedPrevC ?? NaN;
+  const beforeC = s.typedBeforeC ?? NaN;
   const pairC = s.typedPairC ?? NaN;
   s.typedPrevC = valueC;
+  s.typedBeforeC = previousC;
+  if (watchTypedBandExit(s, timeS, beforeC, previousC, valueC, sink)) {
+    s.typedPairC = NaN;
+    return true;
+  }
   // A reading below the pair that pairs with nothing is a pre-cut sag: the pair still stands
   // for the rise after it (a component read twice, one reading a degree low, then the climb).
   // A reading back at the pair's level after such a sag (65, 65.5, 64.5, 65.5) keeps it too.
@@ -323,6 +337,29 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   s.typedPairC = NaN;
   if (!isOwnCut(s, timeS, pairC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, pairC, valueC, sink);
+  return true;
+}
+
+/**
+ * Typed readings, with the charge and no plan: two readings in a band whose component the column
+ * can bring over pure (not the last one), and a jump out of its top far larger than the climb
+ * between them, are that component's cut. Read by hand every minute or two, a short cut shows
+ * no pair: 64, 69, then 97 for methanol off water. The jump must be TYPED_EXIT_JUMP_C at least,
+ * TYPED_EXIT_RATIO times the climb in the band and the deadband and a reading step, and the
+ * plateau rules apply (isOwnCut). A plan's windows already raise the cut where the head crosses
+ * out of one. Returns whether it raised one.
+ */
+function watchTypedBandExit(s: WatcherState, timeS: number, beforeC: number, previousC: number, valueC: number, sink: EventSink): boolean {
+  const expected = s.expectedPlateaus ?? [];
+  if (s.plan.length > 0 || expected.length < 2 || !Number.isFinite(beforeC) || !Number.isFinite(previousC)) return false;
+  const band = expected.find((b) => b.reachesPurity !== false && holdsLevel(b, beforeC) && holdsLevel(b, previousC));
+  if (!band || !(valueC > band.toC) || isLastLevel(s, previousC)) return false;
+  const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
+  const jumpC = valueC - previousC;
+  if (!(jumpC >= Math.max(TYPED_EXIT_JUMP_C, TYPED_EXIT_RATIO * Math.abs(previousC - beforeC), s.options.breakthroughMinRiseC + stepC))) return false;
+  const levelC = (beforeC + previousC) / 2;
+  if (!isOwnCut(s, timeS, levelC, PAUSE_C)) return false;
+  raiseBreakthrough(s, timeS, levelC, valueC, sink);
   return true;
 }
 
@@ -370,6 +407,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.creepSinceS = NaN;
   s.climbSag = noClimbSag();
   s.typedPrevC = NaN;
+  s.typedBeforeC = NaN;
   s.typedPairC = NaN;
   s.kneeSinceS = NaN;
   s.riseSinceS = NaN;

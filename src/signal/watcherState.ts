@@ -89,6 +89,8 @@ export interface WatcherState {
    * mean of the last two when they agreed (NaN: they did not). Absent in older saves. Units: degC. */
   typedPrevC?: number;
   typedPairC?: number;
+  /** The typed reading before `typedPrevC` while climbing (watchTypedBandExit). Absent in older saves. Units: degC. */
+  typedBeforeC?: number;
   /** The run of identical readings (stuckReading.ts). Absent in states saved before it existed. */
   stuck?: StuckReadings;
   receiverIndex: number;
@@ -119,6 +121,6 @@ export function createWatcherState(options: WatcherOptions, plan: CutWindow[], e
     innovationVarC2: NaN, baselineC: NaN, vapourTimeS: NaN, levelC: NaN, levelCount: 0, plateauCandidateS: NaN, riseSinceS: NaN,
     peakC: NaN, troughC: NaN, fallSinceS: NaN, sagSinceS: NaN, cusumCS: 0,
     residualPowerC2: NaN, fastSlopePowerC2PerS2: NaN, course: createEwRegression(300), brokeFromC: NaN, isShoulder: false, shoulderSagSinceS: NaN, hasShoulderSag: false,
-    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), typedPrevC: NaN, typedPairC: NaN, kneeSinceS: NaN, kneeEndS: NaN, kneeSumC: 0, kneeCount: 0, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
+    hasRaisedNoVapour: false, hasRaisedCreep: false, creepSinceS: NaN, climbSag: noClimbSag(), typedPrevC: NaN, typedPairC: NaN, typedBeforeC: NaN, kneeSinceS: NaN, kneeEndS: NaN, kneeSumC: 0, kneeCount: 0, stuck: createStuckReadings(), receiverIndex: -1, cutSinceS: NaN, windowDwellS: 0, lastAlarmS: {},
   };
 }
