@@ -157,12 +157,12 @@ const KNEE_AFTER_VAPOUR_S = 180;
  * Units: degC. */
 const TYPED_PAIR_C = 0.5;
 const TYPED_STEP_MAX_C = 1;
-/** Typed readings leaving a component's band of the charge (watchTypedBandExit): a jump of at
- * least this much, and this many times the climb between the two readings before it, in the band.
- * Chosen on the benchmark: a climb through a wide band's mixed top (dichloromethane's with a tenth
- * of toluene spans 25 degC) leaves it by a few degrees a reading, a component's cut by tens. */
-const TYPED_EXIT_JUMP_C = 10;
-const TYPED_EXIT_RATIO = 3;
+/** A typed reading this far above the last one, and this many times the climb between the two
+ * before it, is a cut (watchTypedJump). Chosen on the benchmark: a typed climb through a mixed
+ * stretch goes a few degrees a reading, and out of it by a few times that; a short cut ends in a
+ * jump of tens of degrees. */
+const TYPED_JUMP_C = 10;
+const TYPED_JUMP_RATIO = 3;
 
 /** One reading that passed the spike filter; the filters have already taken it. */
 export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number, dtS: number, sink: EventSink): void {
@@ -323,7 +323,7 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   const pairC = s.typedPairC ?? NaN;
   s.typedPrevC = valueC;
   s.typedBeforeC = previousC;
-  if (watchTypedBandExit(s, timeS, beforeC, previousC, valueC, sink)) {
+  if (watchTypedJump(s, timeS, beforeC, previousC, valueC, sink)) {
     s.typedPairC = NaN;
     return true;
   }
@@ -341,22 +341,20 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
 }
 
 /**
- * Typed readings, with the charge and no plan: two readings in a band whose component the column
- * can bring over pure (not the last one), and a jump out of its top far larger than the climb
- * between them, are that component's cut. Read by hand every minute or two, a short cut shows
- * no pair: 64, 69, then 97 for methanol off water. The jump must be TYPED_EXIT_JUMP_C at least,
- * TYPED_EXIT_RATIO times the climb in the band and the deadband and a reading step, and the
- * plateau rules apply (isOwnCut). A plan's windows already raise the cut where the head crosses
- * out of one. Returns whether it raised one.
+ * Typed readings, with no plan: two readings and a jump from the second far larger than the
+ * climb between them are a cut. Read by hand every minute or two, a component that comes over
+ * for three or four minutes shows no two readings that agree, only two on its way and then the
+ * climb to the next one: 64, 69, then 97 for methanol off water. The jump must be
+ * TYPED_JUMP_C at least, TYPED_JUMP_RATIO times the climb between the two and the deadband and a
+ * reading step, and the plateau rules apply (isOwnCut: with the charge, none off a mixed level or
+ * the last one). A plan's windows already raise the cut where the head crosses out of one.
+ * Returns whether it raised one.
  */
-function watchTypedBandExit(s: WatcherState, timeS: number, beforeC: number, previousC: number, valueC: number, sink: EventSink): boolean {
-  const expected = s.expectedPlateaus ?? [];
-  if (s.plan.length > 0 || expected.length < 2 || !Number.isFinite(beforeC) || !Number.isFinite(previousC)) return false;
-  const band = expected.find((b) => b.reachesPurity !== false && holdsLevel(b, beforeC) && holdsLevel(b, previousC));
-  if (!band || !(valueC > band.toC) || isLastLevel(s, previousC)) return false;
+function watchTypedJump(s: WatcherState, timeS: number, beforeC: number, previousC: number, valueC: number, sink: EventSink): boolean {
+  if (s.plan.length > 0 || !Number.isFinite(beforeC) || !Number.isFinite(previousC)) return false;
   const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
   const jumpC = valueC - previousC;
-  if (!(jumpC >= Math.max(TYPED_EXIT_JUMP_C, TYPED_EXIT_RATIO * Math.abs(previousC - beforeC), s.options.breakthroughMinRiseC + stepC))) return false;
+  if (!(jumpC >= Math.max(TYPED_JUMP_C, TYPED_JUMP_RATIO * Math.abs(previousC - beforeC), s.options.breakthroughMinRiseC + stepC))) return false;
   const levelC = (beforeC + previousC) / 2;
   if (!isOwnCut(s, timeS, levelC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, levelC, valueC, sink);

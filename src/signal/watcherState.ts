@@ -89,7 +89,7 @@ export interface WatcherState {
    * mean of the last two when they agreed (NaN: they did not). Absent in older saves. Units: degC. */
   typedPrevC?: number;
   typedPairC?: number;
-  /** The typed reading before `typedPrevC` while climbing (watchTypedBandExit). Absent in older saves. Units: degC. */
+  /** The typed reading before `typedPrevC` while climbing (watchTypedJump). Absent in older saves. Units: degC. */
   typedBeforeC?: number;
   /** The run of identical readings (stuckReading.ts). Absent in states saved before it existed. */
   stuck?: StuckReadings;

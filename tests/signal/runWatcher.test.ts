@@ -149,6 +149,20 @@ describe('RunWatcher', () => {
     expect(events[2]!.timeS).toBe(810);
   });
 
+  describe('a typed cut with no two readings that agree', () => {
+    // Invented typed runs in whole degrees, a reading every 80-115 s.
+    const typed = (points: [number, number][]): WatchEvent[] => analyzeReadings(Float64Array.from(points, (p) => p[0]), Float64Array.from(points, (p) => p[1]));
+    it('two readings on the way and a jump far larger than the climb between them are a cut', () => {
+      const events = typed([[40, 21], [120, 67], [230, 68], [340, 72], [430, 107], [530, 109], [620, 109], [705, 109]]);
+      expect(kinds(events)).toEqual(['vapour', 'breakthrough']);
+      expect(events[1]!.timeS).toBe(430);
+    });
+    it('a climb of a few degrees a reading that steepens by less than three times is no cut', () => {
+      const events = typed([[40, 21], [120, 38], [230, 41], [340, 44], [430, 51], [530, 58], [620, 66], [705, 75], [800, 88], [910, 100], [1000, 105], [1090, 107], [1180, 107], [1290, 107]]);
+      expect(kinds(events).filter((k) => k === 'breakthrough')).toEqual([]);
+    });
+  });
+
   describe('a cut two typed readings long', () => {
     // Invented typed runs, a reading every 90-101 s.
     const typed = (readings: number[]): WatchEvent[] =>

@@ -93,27 +93,17 @@ describe('RunWatcher told where the charge\'s plateaus lie', () => {
     expect(events).toEqual(whole);
   });
 
-  describe('typed readings leaving a band', () => {
-    // Invented typed runs in whole degrees, a reading every 80-115 s: a short cut of the light
-    // component shows no two readings that agree, only two in its band and then the jump.
-    const typed = (points: [number, number][], context = {}): string[] =>
+  it('typed readings: a jump off a band the column cannot bring to purity is no cut; with a plan the window\'s crossing is the one alarm', () => {
+    // Invented typed run in whole degrees, a reading every 80-115 s: two readings in the light
+    // band and the jump to the heavy one (watchTypedJump, in runWatcher.test.ts, without these).
+    const points: [number, number][] = [[40, 21], [120, 67], [230, 68], [340, 72], [430, 107], [530, 109], [620, 109], [705, 109]];
+    const typed = (context: object): string[] =>
       alarms(analyzeReadings(Float64Array.from(points, (p) => p[0]), Float64Array.from(points, (p) => p[1]), context));
-    const shortCut: [number, number][] = [[40, 21], [120, 67], [230, 68], [340, 72], [430, 107], [530, 109], [620, 109], [705, 109]];
-
-    it('two readings in a component\'s band and a jump far larger than the climb between them are its cut', () => {
-      expect(typed(shortCut, { expectedPlateaus: bands })).toEqual(['vapour', 'breakthrough']);
-      // From the head alone a climb of 4 degC a reading may be a mixed stretch: nothing.
-      expect(typed(shortCut)).toEqual(['vapour']);
-    });
-
-    it('a climb leaving a wide band by a few times its own climb is no cut, nor is a band the column cannot bring to purity', () => {
-      // The band of a light component with a tenth of a heavy one can span 25 degC: its mixed top
-      // is climbed 10-15 degC a reading.
-      const wide: ExpectedPlateau[] = [{ label: 'light', fromC: 36, toC: 62 }, { label: 'heavy', fromC: 103, toC: 110 }];
-      expect(typed([[40, 21], [120, 38], [230, 41], [340, 44], [430, 58], [530, 88], [620, 105], [705, 107]], { expectedPlateaus: wide })).toEqual(['vapour']);
-      const unreachable = bands.map((b) => (b.label === 'light' ? { ...b, reachesPurity: false } : b));
-      expect(typed(shortCut, { expectedPlateaus: unreachable })).toEqual(['vapour']);
-    });
+    expect(typed({ expectedPlateaus: bands })).toEqual(['vapour', 'breakthrough']);
+    const unreachable = bands.map((b) => (b.label === 'light' ? { ...b, reachesPurity: false } : b));
+    expect(typed({ expectedPlateaus: unreachable })).toEqual(['vapour']);
+    const plan = [{ receiver: 1, fromC: 60, toC: 76 }, { receiver: 2, fromC: 76, toC: 104 }, { receiver: 3, fromC: 104, toC: 118 }];
+    expect(typed({ plan, expectedPlateaus: bands })).toEqual(['vapour:1', 'cut:3']);
   });
 
   it('refuses a band that ends below its start, with the reason', () => {
