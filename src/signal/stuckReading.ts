@@ -55,8 +55,10 @@ const INDEPENDENT_S = 1;
 const QUIET_SHARE = 0.5;
 /** On a quiet board, a plateau's stillness must last this long as well. Units: s. */
 const QUIET_MIN_S = 600;
-/** The value must have changed this often in the stretch before its stillness means anything. */
-const MIN_CHANGES = 20;
+/** The value must have changed this often in the stretch before its stillness means anything.
+ * Ten, not twenty: a board that hung in a plateau's first minute (twenty changes take a loud
+ * board read every 2 s about that long) was otherwise never judged at all. */
+const MIN_CHANGES = 10;
 /** Never fewer identical readings, nor a shorter time, than these. */
 const MIN_READINGS = 10;
 const MIN_SECONDS = 30;

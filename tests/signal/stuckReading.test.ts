@@ -116,6 +116,19 @@ describe('a reading stuck where it must move', () => {
     }
   });
 
+  it('a board that hangs 40 s after the plateau is found, before twenty changes of value, is caught within a minute', () => {
+    // A loud board (0.2 degC in 0.25 degC steps) read every 2 s shows ten changes of value in
+    // half a minute; waiting for twenty, a board that hung sooner was never judged at all.
+    for (const seed of [1, 2, 3, 7]) {
+      const live = trace(1500, 2, 0.2, 0.25, Infinity, seed);
+      const plateauS = run(new RunWatcher(), live.t, live.c).find((e) => e.kind === 'plateau')!.timeS;
+      const { t, c } = trace(1500, 2, 0.2, 0.25, plateauS + 40, seed);
+      const stuck = stuckFaults(run(new RunWatcher(), t, c));
+      expect(stuck, `seed ${seed}`).toHaveLength(1);
+      expect(stuck[0]!.timeS - (plateauS + 40), `seed ${seed}`).toBeLessThan(60);
+    }
+  });
+
   it('a meter that freezes on the plateau raises one sensor fault within a minute, and trusts the sensor again when it moves', () => {
     const { t, c } = trace(1500, 1, 0.1, 0.01, 1200);
     const watcher = new RunWatcher();
