@@ -116,7 +116,8 @@ function fitNoise(tauS: number, intervalS: number): void {
  * Analysis, from memory). A fit of one reading, or of readings packed too close for a slope,
  * predicts its weighted mean: N's first entry over M's squared. A reading's prediction error then
  * has 1 + this times the noise's variance: a fit just restarted on two readings extrapolates a
- * line through them, and misses the third by sqrt(6) noise sigmas on average, not sqrt(1.3).
+ * line through them and misses the third by sqrt(6) noise sigmas (root mean square), where a
+ * settled fit of a reading a second with tau 4 s misses by sqrt(1.34).
  */
 export function ewRegressionPredictionVariance(r: EwRegression, aheadS: number): number {
   if (!(r.w > 0)) return Infinity;
