@@ -96,9 +96,14 @@ export function ewSlopeNoisePerSd(tauS: number, intervalS: number): number {
   return Math.sqrt(noise[1]!) / intervalS;
 }
 
-/** Level and slope (per reading interval) variances into `noise`: no allocation per reading. */
-const noise = new Float64Array(2);
+/** Level and slope (per reading interval) variances and their covariance into `noise`: no
+ * allocation per reading, and nothing worked again while the time constant and interval stay. */
+const noise = new Float64Array(3);
+let noiseTauS = Number.NaN, noiseIntervalS = Number.NaN;
 function fitNoise(tauS: number, intervalS: number): void {
+  if (tauS === noiseTauS && intervalS === noiseIntervalS) return;
+  noiseTauS = tauS;
+  noiseIntervalS = intervalS;
   const q = Math.exp(-intervalS / tauS), p = q * q;
   const s0 = 1 / (1 - q), s1 = q * s0 * s0, s2 = q * (1 + q) * s0 * s0 * s0;
   const u0 = 1 / (1 - p), u1 = p * u0 * u0, u2 = p * (1 + p) * u0 * u0 * u0;
@@ -107,6 +112,7 @@ function fitNoise(tauS: number, intervalS: number): void {
   const det2 = (s0 * s2 - s1 * s1) ** 2;
   noise[0] = (s2 * s2 * u0 - 2 * s1 * s2 * u1 + s1 * s1 * u2) / det2;
   noise[1] = (s1 * s1 * u0 - 2 * s0 * s1 * u1 + s0 * s0 * u2) / det2;
+  noise[2] = (s1 * s2 * u0 - (s1 * s1 + s0 * s2) * u1 + s0 * s1 * u2) / det2;
 }
 
 /**
@@ -134,14 +140,8 @@ export function ewRegressionPredictionVariance(r: EwRegression, aheadS: number):
  * interval ahead (the closed forms of fitNoise, with the level-slope covariance).
  */
 export function ewSteadyPredictionVariance(tauS: number, intervalS: number): number {
-  const q = Math.exp(-intervalS / tauS), p = q * q;
-  const s0 = 1 / (1 - q), s1 = q * s0 * s0, s2 = q * (1 + q) * s0 * s0 * s0;
-  const u0 = 1 / (1 - p), u1 = p * u0 * u0, u2 = p * (1 + p) * u0 * u0 * u0;
-  const det2 = (s0 * s2 - s1 * s1) ** 2;
-  const level = (s2 * s2 * u0 - 2 * s1 * s2 * u1 + s1 * s1 * u2) / det2;
-  const slope = (s1 * s1 * u0 - 2 * s0 * s1 * u1 + s0 * s0 * u2) / det2;
-  const covariance = (s1 * s2 * u0 - (s1 * s1 + s0 * s2) * u1 + s0 * s1 * u2) / det2;
-  return level + 2 * covariance + slope;
+  fitNoise(tauS, intervalS);
+  return noise[0]! + 2 * noise[2]! + noise[1]!;
 }
 
 /** Weighted mean, with no trend correction (lags a ramp, ignores nothing). Units: degC. */

@@ -332,12 +332,17 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   // A reading back at the pair's level after such a sag (65, 65.5, 64.5, 65.5) keeps it too.
   s.typedPairC = Math.abs(valueC - previousC) <= TYPED_PAIR_C ? (valueC + previousC) / 2 : valueC - pairC <= TYPED_PAIR_C ? pairC : NaN;
   // One reading step more than the deadband: a typed reading a step up may be rounding only.
-  const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
+  const stepC = typedStepC(s);
   if (!(valueC >= pairC + s.options.breakthroughMinRiseC + stepC)) return false;
   s.typedPairC = NaN;
   if (!isOwnCut(s, timeS, pairC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, pairC, valueC, sink);
   return true;
+}
+
+/** A typed reading's step (its resolution, at most TYPED_STEP_MAX_C): a reading a step up may be rounding only. */
+function typedStepC(s: WatcherState): number {
+  return Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
 }
 
 /**
@@ -352,7 +357,7 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
  */
 function watchTypedJump(s: WatcherState, timeS: number, beforeC: number, previousC: number, valueC: number, sink: EventSink): boolean {
   if (s.plan.length > 0 || !Number.isFinite(beforeC) || !Number.isFinite(previousC)) return false;
-  const stepC = Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
+  const stepC = typedStepC(s);
   const jumpC = valueC - previousC;
   if (!(jumpC >= Math.max(TYPED_JUMP_C, TYPED_JUMP_RATIO * Math.abs(previousC - beforeC), s.options.breakthroughMinRiseC + stepC))) return false;
   const levelC = (beforeC + previousC) / 2;
