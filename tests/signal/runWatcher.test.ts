@@ -182,6 +182,15 @@ describe('RunWatcher', () => {
       expect(kinds(events).slice(0, 2)).toEqual(['vapour', 'breakthrough']);
       expect(events[1]!.headC).toBe(91.5);
     });
+    it('a pair, a reading a degree up (the head beginning to leave), then a steeper rise is that cut\'s breakthrough, off the pair', () => {
+      const events = typed([19.5, 19.5, 55.0, 55.5, 56.5, 59.5, 70.0, 80.0, 99.5, 99.0, 99.5, 99.0]);
+      expect(kinds(events).slice(0, 2)).toEqual(['vapour', 'breakthrough']);
+      expect(events[1]!.headC).toBe(59.5);
+    });
+    it('a pair, a reading a degree up, then a creep of 2 degC a reading that never steepens further, is no breakthrough', () => {
+      const events = typed([19.5, 19.5, 55.0, 55.5, 56.5, 58.5, 60.5, 62.5, 64.5, 66.5, 68.5, 70.5]);
+      expect(kinds(events).filter((k) => k === 'breakthrough')).toEqual([]);
+    });
     it('a climb of a degree or two a reading, in whole degrees, has no pair: no breakthrough', () => {
       expect(kinds(typed([21, 21, 60, 62, 64, 66, 68, 69, 71, 72, 74, 75, 77]))).toEqual(['vapour']);
     });
