@@ -210,7 +210,11 @@ export function onAcceptedReading(s: WatcherState, timeS: number, valueC: number
     if (window && headC < window.fromC) s.windowDwellS = 0;
     else if (window && headC < window.toC + CUT_MARGIN_C) s.windowDwellS = (s.windowDwellS ?? 0) + dtS;
     const hasSettled = Number.isFinite(s.levelC) || (s.windowDwellS ?? 0) >= Math.max(s.options.plateauHoldS, s.intervalS);
-    const isClimbing = (s.state === 'rising' || s.state === 'leaving') && hasSettled;
+    // Sensor readings the slow fit already finds steady (a plateau candidate) are the head
+    // settling, not climbing through: a top under it is the plan missing the plateau, as once it
+    // is declared. (Typed readings restart the slow fit at each jump; they keep the crossing.)
+    const isSettling = s.intervalS < s.options.handIntervalS && Number.isFinite(s.plateauCandidateS);
+    const isClimbing = (s.state === 'rising' || s.state === 'leaving') && hasSettled && !isSettling;
     const isRisingOff = s.state === 'plateau' && s.intervalS >= s.options.handIntervalS && headC - s.levelC >= s.options.breakthroughMinRiseC;
     if (isClimbing || isRisingOff) watchPlannedCut(s, timeS, headC, sink);
     else s.cutSinceS = NaN;

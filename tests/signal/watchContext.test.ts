@@ -195,9 +195,10 @@ describe('RunWatcher with a cut plan', () => {
   });
 
   // Three components for the tests below: a head that follows straight lines between `points`
-  // ([s, degC]) for 40 minutes, read every half second by a board with draughts and 0.25 degC steps.
+  // ([s, degC]) for 40 minutes, read every half second (unless told) by a board with draughts and
+  // 0.25 degC steps.
   const bands3: ExpectedPlateau[] = [{ label: 'light', fromC: 52, toC: 62 }, { label: 'mid', fromC: 64, toC: 74 }, { label: 'heavy', fromC: 95, toC: 104 }];
-  const trace = (points: [number, number][], seed: number) => {
+  const trace = (points: [number, number][], seed: number, intervalS = 0.5) => {
     const at = (t: number): number => {
       const k = points.findIndex(([pt]) => pt > t);
       if (k <= 0) return points[k < 0 ? points.length - 1 : 0]![1];
@@ -205,7 +206,7 @@ describe('RunWatcher with a cut plan', () => {
       return v0 + ((v1 - v0) * (t - t0)) / (t1 - t0);
     };
     const truthTimeS = Float64Array.from({ length: 2401 }, (_, i) => i);
-    return sensorReadings(truthTimeS, truthTimeS.map(at), { seed, intervalS: 0.5, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
+    return sensorReadings(truthTimeS, truthTimeS.map(at), { seed, intervalS, noiseSdC: 0.15, quantumC: 0.25, lagTauS: 1, draftSdC: 0.1, draftTauS: 40 });
   };
 
   it('with named cuts, a creeping cut never declared a plateau just below its window ends in one alarm naming the receiver after it', () => {
@@ -248,6 +249,23 @@ describe('RunWatcher with a cut plan', () => {
       if (found.includes('cut:4')) crossed++;
     }
     expect(crossed).toBeGreaterThan(0);
+  });
+
+  it('with named cuts, a first plateau that settles just above its window, slowly enough to look steady, raises no cut as it settles', () => {
+    // Invented: the light component's vapour holds at 67.6 degC (in its window, 67-68) for half a
+    // minute, climbs to 68.1 in 15 s and then settles over 75 s at 68.6 (0.4 degC/min, under the
+    // plateau's flat slope), and creeps on; the heavy one follows.
+    const points: [number, number][] = [[0, 20], [300, 20], [304, 67.6], [330, 67.6], [345, 68.1], [420, 68.6], [1200, 68.9], [1260, 80], [1320, 99.5], [2400, 99.6]];
+    const plan = [{ receiver: 1, fromC: 67, toC: 68, compound: 'light' }, { receiver: 2, fromC: 68, toC: 97, compound: null }, { receiver: 3, fromC: 97, toC: 102, compound: 'heavy' }];
+    const lightBands: ExpectedPlateau[] = [{ label: 'light', fromC: 64, toC: 74 }, namedBands[1]!];
+    for (const intervalS of [1, 2]) {
+      for (const seed of [5, 6, 7]) {
+        const r = trace(points, seed, intervalS);
+        const events = analyzeReadings(r.timeS, r.headC, { plan, expectedPlateaus: lightBands });
+        expect(events.find((e) => e.kind === 'plateau')?.receiver, `${intervalS} s, seed ${seed}`).toBe(1);
+        expect(alarms(events), `${intervalS} s, seed ${seed}`).toEqual(['vapour:1', 'breakthrough:2', 'cut:3']);
+      }
+    }
   });
 
   it('with named cuts, a plateau further down the band than a thermometer reads off is no cut into the window above', () => {
