@@ -323,9 +323,7 @@ function watchRising(s: WatcherState, timeS: number, valueC: number, fastC: numb
  */
 function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: EventSink): boolean {
   if (!(s.intervalS >= s.options.handIntervalS)) {
-    s.typedPrevC = NaN;
-    s.typedBeforeC = NaN;
-    s.typedPairC = NaN;
+    forgetTypedReadings(s);
     return false;
   }
   const previousC = s.typedPrevC ?? NaN;
@@ -333,13 +331,12 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   const pairC = s.typedPairC ?? NaN;
   s.typedPrevC = valueC;
   s.typedBeforeC = previousC;
-  if (watchTypedJump(s, timeS, beforeC, previousC, valueC, sink)) {
+  // One reading step more than the deadband: a typed reading a step up may be rounding only.
+  const riseC = s.options.breakthroughMinRiseC + typedStepC(s);
+  if (watchTypedJump(s, timeS, beforeC, previousC, valueC, riseC, sink)) {
     s.typedPairC = NaN;
     return true;
   }
-  // One reading step more than the deadband: a typed reading a step up may be rounding only.
-  const stepC = typedStepC(s);
-  const riseC = s.options.breakthroughMinRiseC + stepC;
   // A reading below the pair that pairs with nothing is a pre-cut sag: the pair still stands
   // for the rise after it (a component read twice, one reading a degree low, then the climb).
   // A reading back at the pair's level after such a sag (65, 65.5, 64.5, 65.5) keeps it too, and
@@ -356,6 +353,13 @@ function watchTypedPair(s: WatcherState, timeS: number, valueC: number, sink: Ev
   return true;
 }
 
+/** The typed readings the pair and jump rules remember: none. */
+function forgetTypedReadings(s: WatcherState): void {
+  s.typedPrevC = NaN;
+  s.typedBeforeC = NaN;
+  s.typedPairC = NaN;
+}
+
 /** A typed reading's step (its resolution, at most TYPED_STEP_MAX_C): a reading a step up may be rounding only. */
 function typedStepC(s: WatcherState): number {
   return Math.min(Number.isFinite(s.resolutionC) ? s.resolutionC! : TYPED_PAIR_C, TYPED_STEP_MAX_C);
@@ -366,16 +370,15 @@ function typedStepC(s: WatcherState): number {
  * climb between them are a cut. Read by hand every minute or two, a component that comes over
  * for three or four minutes shows no two readings that agree, only two on its way and then the
  * climb to the next one: 64, 69, then 97 for methanol off water. The jump must be
- * TYPED_JUMP_C at least, TYPED_JUMP_RATIO times the climb between the two and the deadband and a
- * reading step, and the plateau rules apply (isOwnCut: with the charge, none off a mixed level or
+ * TYPED_JUMP_C at least, TYPED_JUMP_RATIO times the climb between the two and `riseC` (the
+ * deadband and a reading step), and the plateau rules apply (isOwnCut: with the charge, none off a mixed level or
  * the last one). A plan's windows already raise the cut where the head crosses out of one.
  * Returns whether it raised one.
  */
-function watchTypedJump(s: WatcherState, timeS: number, beforeC: number, previousC: number, valueC: number, sink: EventSink): boolean {
+function watchTypedJump(s: WatcherState, timeS: number, beforeC: number, previousC: number, valueC: number, riseC: number, sink: EventSink): boolean {
   if (s.plan.length > 0 || !Number.isFinite(beforeC) || !Number.isFinite(previousC)) return false;
-  const stepC = typedStepC(s);
   const jumpC = valueC - previousC;
-  if (!(jumpC >= Math.max(TYPED_JUMP_C, TYPED_JUMP_RATIO * Math.abs(previousC - beforeC), s.options.breakthroughMinRiseC + stepC))) return false;
+  if (!(jumpC >= Math.max(TYPED_JUMP_C, TYPED_JUMP_RATIO * Math.abs(previousC - beforeC), riseC))) return false;
   const levelC = (beforeC + previousC) / 2;
   if (!isOwnCut(s, timeS, levelC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, levelC, valueC, sink);
@@ -425,9 +428,7 @@ function enterPlateau(s: WatcherState, timeS: number, levelC: number, sink: Even
   s.hasRaisedCreep = false;
   s.creepSinceS = NaN;
   s.climbSag = noClimbSag();
-  s.typedPrevC = NaN;
-  s.typedBeforeC = NaN;
-  s.typedPairC = NaN;
+  forgetTypedReadings(s);
   s.kneeSinceS = NaN;
   s.riseSinceS = NaN;
   s.stallReason = null;
