@@ -379,6 +379,10 @@ function watchTypedJump(s: WatcherState, timeS: number, beforeC: number, previou
   if (s.plan.length > 0 || !Number.isFinite(beforeC) || !Number.isFinite(previousC)) return false;
   const jumpC = valueC - previousC;
   if (!(jumpC >= Math.max(TYPED_JUMP_C, TYPED_JUMP_RATIO * Math.abs(previousC - beforeC), riseC))) return false;
+  // The first of the two must be clear of the climb the last breakthrough announced: one still
+  // within a pause of its level (55, 65, then 96 off a plateau at 52.6 that broke at 54) is that
+  // climb, whose two readings straddle the pause's edge (isOwnCut judges their mean only).
+  if (beforeC < (s.brokeFromC ?? NaN) + PAUSE_C) return false;
   const levelC = (beforeC + previousC) / 2;
   if (!isOwnCut(s, timeS, levelC, PAUSE_C)) return false;
   raiseBreakthrough(s, timeS, levelC, valueC, sink);

@@ -161,6 +161,13 @@ describe('RunWatcher', () => {
       const events = typed([[40, 21], [120, 38], [230, 41], [340, 44], [430, 51], [530, 58], [620, 66], [705, 75], [800, 88], [910, 100], [1000, 105], [1090, 107], [1180, 107], [1290, 107]]);
       expect(kinds(events).filter((k) => k === 'breakthrough')).toEqual([]);
     });
+    it('a jump off a climb just cut from a plateau is that climb: one alarm, not two', () => {
+      // A plateau at 52 breaks at 54; 55 and 65 are the climb on its way, 96 the same climb.
+      const readings = [21, 21, 51, 52, 52, 52, 52, 52, 52, 54, 55, 65, 96, 104, 105, 105];
+      const events = typed(readings.map((c, i): [number, number] => [30 + i * 95 + (i % 3) * 5, c]));
+      expect(kinds(events)).toEqual(['vapour', 'plateau', 'breakthrough']);
+      expect(events[2]!.headC).toBeLessThan(56);
+    });
   });
 
   describe('a cut two typed readings long', () => {
