@@ -371,17 +371,17 @@ function typedStepC(s: WatcherState): number {
  * for three or four minutes shows no two readings that agree, only two on its way and then the
  * climb to the next one: 64, 69, then 97 for methanol off water. The jump must be
  * TYPED_JUMP_C at least, TYPED_JUMP_RATIO times the climb between the two and `riseC` (the
- * deadband and a reading step), and the plateau rules apply (isOwnCut: with the charge, none off a mixed level or
- * the last one). A plan's windows already raise the cut where the head crosses out of one.
- * Returns whether it raised one.
+ * deadband and a reading step); the first of the two must lie a pause (PAUSE_C) above the last
+ * breakthrough's level, and the plateau rules apply to their mean (isOwnCut: with the charge,
+ * none off a mixed level or the last one). A plan's windows already raise the cut where the head
+ * crosses out of one. Returns whether it raised one.
  */
 function watchTypedJump(s: WatcherState, timeS: number, beforeC: number, previousC: number, valueC: number, riseC: number, sink: EventSink): boolean {
   if (s.plan.length > 0 || !Number.isFinite(beforeC) || !Number.isFinite(previousC)) return false;
   const jumpC = valueC - previousC;
   if (!(jumpC >= Math.max(TYPED_JUMP_C, TYPED_JUMP_RATIO * Math.abs(previousC - beforeC), riseC))) return false;
-  // The first of the two must be clear of the climb the last breakthrough announced: one still
-  // within a pause of its level (55, 65, then 96 off a plateau at 52.6 that broke at 54) is that
-  // climb, whose two readings straddle the pause's edge (isOwnCut judges their mean only).
+  // A first reading still within a pause of the last breakthrough's level is that climb (55, 65,
+  // then 96 off a plateau at 52.6 that broke at 54): its two readings straddle the pause's edge.
   if (beforeC < (s.brokeFromC ?? NaN) + PAUSE_C) return false;
   const levelC = (beforeC + previousC) / 2;
   if (!isOwnCut(s, timeS, levelC, PAUSE_C)) return false;
