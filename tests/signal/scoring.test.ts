@@ -69,6 +69,23 @@ describe('scoreRun', () => {
     const stray = scoreRun(windows.alarms, windows.plateaus, [...events, { timeS: 510, kind: 'vapour', headC: 70 }], windows.cutIns);
     expect(stray.falseAlarmCount).toBe(1);
   });
+  it('scoreRun gives a short main cut both its alarms: the cut into it takes its cut-in window, its breakthrough the breakthrough window', () => {
+    // The second interval (500-650 s, the head climbing 0.1 degC/s) is short: its breakthrough
+    // window (525-825 s) overlaps its cut-in window (440-740 s). A cut into it at 530 s came
+    // first and, scored in time order, took the breakthrough window from the breakthrough at
+    // 600 s, which then counted as a nuisance.
+    const truth = { ...handTruth(), purityIntervals: [{ startS: 150, endS: 400, component: 'a' }, { startS: 500, endS: 650, component: 'b' }] };
+    const windows = truthWindows(truth, 1, false);
+    expect(windows.alarms.filter((a) => a.kind === 'breakthrough').map((a) => [a.fromS, a.toS])).toEqual([[351, 651], [526, 826]]);
+    const events = [{ timeS: 420, kind: 'breakthrough', headC: 62 }, { timeS: 530, kind: 'cut', headC: 73 }, { timeS: 600, kind: 'breakthrough', headC: 80 }];
+    const s = scoreRun(windows.alarms, windows.plateaus, events, windows.cutIns);
+    expect([s.hitCount.breakthrough, s.cutInHitCount, s.falseAlarmCount, s.nuisanceAlarmCount]).toEqual([2, 1, 0, 0]);
+    expect(s.breakthroughLatencyS).toEqual([9, 14]);
+    // With no cut-in windows (the issue's scoring alone) the cut keeps the window it took.
+    const issueOnly = scoreRun(windows.alarms, windows.plateaus, events);
+    expect([issueOnly.hitCount.breakthrough, issueOnly.falseAlarmCount, issueOnly.nuisanceAlarmCount]).toEqual([2, 1, 1]);
+    expect(issueOnly.falseAlarms.map((e) => e.timeS)).toEqual([600]);
+  });
   it('truthWindows gives a first purity interval a cut-in window only when a mixed fraction came over before it', () => {
     // The first distillate pure 50 s after the vapour (100 s): the first receiver takes it.
     expect(truthWindows(handTruth(), 1, false).cutIns).toEqual([]);

@@ -36,7 +36,9 @@ export interface RunScore {
  * false too); an alarm in no window is false. A plateau truth is hit by any plateau event
  * inside its interval with the level within 1.5 degC. A planned cut that hits no alarm window may
  * take an unhit `cutIns` window instead (our addition, truthWindows); pass none for the issue's
- * scoring alone.
+ * scoring alone. Where a cut took a breakthrough window that an unhit cut-in window also holds,
+ * and a later alarm in that breakthrough window would else count false, the cut takes the cut-in
+ * window and the later alarm the breakthrough's (a short main cut: the cut into it, then its end).
  */
 export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly PlateauTruth[], events: readonly ScoredEvent[], cutIns: readonly CutInWindow[] = []): RunScore {
   const zero = (): Record<ScoredAlarmKind, number> => ({ vapour: 0, breakthrough: 0, stall: 0, 'sensor-fault': 0 });
@@ -46,38 +48,66 @@ export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly Pla
   };
   const isCutInHit = cutIns.map(() => false);
   for (const w of windows) score.truthCount[w.kind]++;
-  const isHit = windows.map(() => false);
   const alarms = events.filter((e) => ALARM_KINDS.has(e.kind)).sort((a, b) => a.timeS - b.timeS);
-  for (const alarm of alarms) {
+  // What each alarm took: a window's index, a cut-in window's (as -2 - index), or nothing (-1).
+  const took: number[] = [];
+  const isNuisance: boolean[] = [];
+  const hitBy = windows.map(() => -1);
+  for (const [n, alarm] of alarms.entries()) {
     let open = -1;
     let isInsideHit = false;
     for (let i = 0; i < windows.length; i++) {
       const w = windows[i]!;
       if (w.kind !== windowKindOf(alarm.kind) || alarm.timeS < w.fromS || alarm.timeS > w.toS) continue;
-      if (!isHit[i]) {
+      if (hitBy[i]! < 0) {
         open = i;
         break;
       }
       isInsideHit = true;
     }
+    took.push(-1);
+    isNuisance.push(false);
     if (open < 0 && alarm.kind === 'cut') {
-      const cutIn = cutIns.findIndex((w, i) => !isCutInHit[i] && alarm.timeS >= w.fromS && alarm.timeS <= w.toS);
+      const cutIn = cutIns.findIndex((w, i) => !isCutInHit[i] && holds(w, alarm));
       if (cutIn >= 0) {
         isCutInHit[cutIn] = true;
-        score.cutInHitCount++;
+        took[n] = -2 - cutIn;
         continue;
       }
-      if (cutIns.some((w, i) => isCutInHit[i] && alarm.timeS >= w.fromS && alarm.timeS <= w.toS)) isInsideHit = true;
+      if (cutIns.some((w, i) => isCutInHit[i] && holds(w, alarm))) isInsideHit = true;
     }
     if (open >= 0) {
-      const w = windows[open]!;
-      isHit[open] = true;
+      hitBy[open] = n;
+      took[n] = open;
+    } else if (isInsideHit) isNuisance[n] = true;
+  }
+  // A planned cut that took a breakthrough window while an unhit cut-in window also held it gives
+  // the breakthrough window up to a later alarm that else counts false: the cut is the next main
+  // cut beginning, that alarm the breakthrough (so both are what they are, not one a nuisance).
+  for (const [n, alarm] of alarms.entries()) {
+    if (took[n] !== -1 || windowKindOf(alarm.kind) !== 'breakthrough') continue;
+    const i = windows.findIndex((w, j) => w.kind === 'breakthrough' && holds(w, alarm) && hitBy[j]! >= 0 && alarms[hitBy[j]!]!.kind === 'cut');
+    if (i < 0) continue;
+    const cut = hitBy[i]!;
+    const cutIn = cutIns.findIndex((w, j) => !isCutInHit[j] && holds(w, alarms[cut]!));
+    if (cutIn < 0) continue;
+    isCutInHit[cutIn] = true;
+    took[cut] = -2 - cutIn;
+    hitBy[i] = n;
+    took[n] = i;
+    isNuisance[n] = false;
+  }
+  for (const [n, alarm] of alarms.entries()) {
+    if (took[n]! >= 0) {
+      const w = windows[took[n]!]!;
       score.hitCount[w.kind]++;
       if (w.kind === 'breakthrough') score.breakthroughLatencyS.push(alarm.timeS - w.timeS);
+    } else if (took[n]! <= -2) {
+      score.cutInHitCount++;
     } else {
       score.falseAlarmCount++;
       score.falseAlarms.push(alarm);
-      if (isInsideHit) score.nuisanceAlarmCount++;
+      if (isNuisance[n]) score.nuisanceAlarmCount++;
     }
   }
   for (const p of plateaus) {
@@ -86,4 +116,8 @@ export function scoreRun(windows: readonly AlarmWindow[], plateaus: readonly Pla
     }
   }
   return score;
+}
+
+function holds(w: { fromS: number; toS: number }, alarm: ScoredEvent): boolean {
+  return alarm.timeS >= w.fromS && alarm.timeS <= w.toS;
 }
